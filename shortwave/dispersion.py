@@ -155,8 +155,11 @@ def wavenumber(omega, water=None, depth=np.inf, gravity=GRAVITY, *, rtol=1e-13, 
     t = _tension_ratio(water)
     om, h, t = np.broadcast_arrays(omega, h, t)
     om = om.astype(float).copy()
-    nan = np.isnan(om)
+    # NaN in omega, depth or the liquid's properties -> NaN out (solve a dummy there)
+    nan = np.isnan(om) | np.isnan(h) | np.isnan(t)
     om[nan] = 1.0
+    h = np.where(nan, np.inf, h)
+    t = np.where(nan, 7e-5, t)
     deep = np.isinf(h)
     hh = np.where(deep, 1.0, h)
     # Deep-water root lies in [min(a, b)/2, min(a, b)] with a = w^2/g, b = (w^2/T)^(1/3);
@@ -189,7 +192,7 @@ def wavenumber(omega, water=None, depth=np.inf, gravity=GRAVITY, *, rtol=1e-13, 
         lo = np.where(f < 0, k, lo)
         hi = np.where(f > 0, k, hi)
         knew = k - f / df
-        bad = ~((knew > lo) & (knew < hi))
+        bad = ~((knew >= lo) & (knew <= hi))  # inclusive: a converged k stays put
         knew = np.where(bad, np.sqrt(lo * hi), knew)
         done = np.abs(knew - k) <= rtol * knew
         k = knew

@@ -1,0 +1,167 @@
+"""Maps of gridded scene fields and the figures of the demonstration run.
+
+Every function takes values already computed by the core or by :mod:`shortwave.fields`,
+draws one figure and writes it as PNG through :func:`shortwave.plots.save_figure`.
+"""
+from __future__ import annotations
+
+import numpy as np
+
+from . import new_figure, save_figure
+
+__all__ = ["speeds_figure", "field_map", "scene_panels"]
+
+
+def speeds_figure(water, path, wavelength_range=(1e-3, 1.0)):
+    """Phase and group speed against wavelength, marking the phase-speed minimum.
+
+    Parameters
+    ----------
+    water : shortwave.water.Water or Liquid
+        The liquid.
+    path : str
+        PNG file to write.
+    wavelength_range : (float, float)
+        Smallest and largest wavelength [m].
+
+    Returns
+    -------
+    str
+        The path written.
+    """
+    from .. import dispersion
+    lam = np.geomspace(*wavelength_range, 400)
+    k = 2 * np.pi / lam
+    c = np.asarray(dispersion.phase_speed(k, water))
+    cg = np.asarray(dispersion.group_speed(k, water))
+    cmin, kmin = dispersion.minimum_phase_speed(water)
+    fig, ax = new_figure(figsize=(6.4, 4.2))
+    ax.loglog(lam * 100, c, label="phase speed c")
+    ax.loglog(lam * 100, cg, "--", label="group speed c_g")
+    ax.plot([2 * np.pi / kmin * 100], [cmin], "o", color="k",
+            label=f"minimum c = {cmin * 100:.1f} cm/s at {2 * np.pi / kmin * 100:.2f} cm")
+    ax.set_xlabel("wavelength [cm]")
+    ax.set_ylabel("speed [m/s]")
+    t = getattr(water, "temperature_c", None)
+    s = getattr(water, "salinity", None)
+    title = "Capillary-gravity waves"
+    if t is not None and s is not None:
+        title += f", water at {float(t):g} degC, {float(s):g} g/kg"
+    ax.set_title(title)
+    ax.grid(True, which="both", alpha=0.3)
+    ax.legend(fontsize=8)
+    return save_figure(fig, path)
+
+
+def _coords(da):
+    """Return (x, y, xlabel, ylabel) for a 2-D DataArray (last dim along x)."""
+    ydim, xdim = da.dims[-2], da.dims[-1]
+
+    def label(dim):
+        c = da.coords.get(dim)
+        if c is None:
+            return np.arange(da.sizes[dim]), dim
+        u = c.attrs.get("units", "")
+        name = c.attrs.get("long_name", dim)
+        return np.asarray(c.values), f"{name} [{u}]" if u else name
+    x, xl = label(xdim)
+    y, yl = label(ydim)
+    return x, y, xl, yl
+
+
+def _draw(ax, da, *, cmap="viridis", vmin=None, vmax=None, title=None, land=None):
+    x, y, xl, yl = _coords(da)
+    vals = np.ma.masked_invalid(np.asarray(da.values, dtype=float))
+    mesh = ax.pcolormesh(x, y, vals, cmap=cmap, vmin=vmin, vmax=vmax, shading="auto")
+    if land is not None:
+        ax.contourf(x, y, np.asarray(land, dtype=float), levels=[0.5, 1.5],
+                    colors=["#c9b99a"])
+    ax.set_xlabel(xl)
+    ax.set_ylabel(yl)
+    ax.set_aspect("equal")
+    units = da.attrs.get("units", "")
+    name = title or da.attrs.get("long_name", da.name)
+    ax.set_title(name if len(name) < 60 else name[:57] + "...", fontsize=9)
+    cb = ax.figure.colorbar(mesh, ax=ax, shrink=0.85)
+    cb.set_label(f"[{units}]" if units else "")
+    return mesh
+
+
+def field_map(da, path, *, cmap="viridis", vmin=None, vmax=None, title=None, land=None,
+              arrows=None):
+    """Map of one 2-D field (NaN cells left blank, land shaded).
+
+    Parameters
+    ----------
+    da : xarray.DataArray
+        Two-dimensional field; its ``long_name`` and ``units`` label the map.
+    path : str
+        PNG file to write.
+    cmap, vmin, vmax : optional
+        Colour map and limits.
+    title : str, optional
+        Overrides the ``long_name``.
+    land : array of bool, optional
+        Cells to shade as land.
+    arrows : (u, v) pair of 2-D arrays, optional
+        Vectors drawn on a thinned grid (e.g. the wind).
+
+    Returns
+    -------
+    str
+        The path written.
+    """
+    if da.ndim != 2:
+        raise ValueError(f"field_map: {da.name} has {da.ndim} dimensions, need 2")
+    fig, ax = new_figure(figsize=(6.4, 5.0))
+    _draw(ax, da, cmap=cmap, vmin=vmin, vmax=vmax, title=title, land=land)
+    if arrows is not None:
+        _quiver(ax, da, *arrows)
+    return save_figure(fig, path)
+
+
+def _quiver(ax, da, u, v):
+    x, y, _, _ = _coords(da)
+    u = np.asarray(u, dtype=float)
+    v = np.asarray(v, dtype=float)
+    sy = max(1, len(y) // 12)
+    sx = max(1, len(x) // 12)
+    xx, yy = np.meshgrid(x[::sx], y[::sy])
+    ax.quiver(xx, yy, u[::sy, ::sx], v[::sy, ::sx], color="k", alpha=0.6, width=0.003)
+
+
+def scene_panels(fields, path, *, land=None, suptitle=None, ncols=2):
+    """Several maps side by side.
+
+    Parameters
+    ----------
+    fields : list of (xarray.DataArray, dict)
+        Each field with keyword options of :func:`field_map` (``cmap``, ``vmin``, ``vmax``,
+        ``title``, ``arrows``).
+    path : str
+        PNG file to write.
+    land : array of bool, optional
+        Cells shaded as land on every panel.
+    suptitle : str, optional
+        Title above the panels.
+
+    Returns
+    -------
+    str
+        The path written.
+    """
+    n = len(fields)
+    nrows = int(np.ceil(n / ncols))
+    fig, axes = new_figure(nrows, ncols, figsize=(5.6 * ncols, 4.6 * nrows), squeeze=False)
+    for ax, (da, opts) in zip(axes.ravel(), fields):
+        opts = dict(opts)
+        arrows = opts.pop("arrows", None)
+        _draw(ax, da, land=land, **opts)
+        if arrows is not None:
+            _quiver(ax, da, *arrows)
+    for ax in axes.ravel()[n:]:
+        ax.set_visible(False)
+    if suptitle:
+        fig.suptitle(suptitle)
+    fig.tight_layout()
+    return save_figure(fig, path)
