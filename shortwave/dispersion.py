@@ -269,8 +269,31 @@ def viscous_damping_rate(k, water=None):
 def viscous_spatial_damping_rate(k, water=None, depth=np.inf, gravity=GRAVITY):
     """Spatial amplitude damping rate Gamma / c_g [m-1] on a clean viscous surface.
 
-    Amplitude decays as exp(-Delta x) along the direction of travel.  Gaster's (1962)
-    transformation: Delta = Gamma / c_g for weak damping.
+    Parameters
+    ----------
+    k : numeric
+        Wavenumber [rad m-1], > 0.
+    water : Water or Liquid, optional
+        Supplies nu, rho and sigma.
+    depth : numeric
+        Water depth [m]; enters only through the group speed.
+
+    Returns
+    -------
+    numeric
+        Delta [m-1]: amplitude decays as exp(-Delta x) along the direction of travel.
+
+    Notes
+    -----
+    Gaster's (1962) transformation Delta = Gamma / c_g for weak damping, with the
+    deep-water surface rate Gamma = 2 nu k^2.  In shallow water the bottom boundary layer
+    adds damping that is not included here.
+
+    Examples
+    --------
+    >>> from shortwave.water import Water
+    >>> round(float(viscous_spatial_damping_rate(370.0, Water(20, 0))), 2)
+    1.18
     """
     return scalar_or_array(np.asarray(viscous_damping_rate(k, water))
                            / np.asarray(group_speed(k, water, depth, gravity)))

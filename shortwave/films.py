@@ -268,8 +268,8 @@ PRESETS = {
         name="mineral-oil",
         source=("light mineral oil carrying surface-active impurities, as an effective "
                 "elastic film: dilational modulus of order 0.01 N/m with the damping maximum "
-                "near 8 Hz (Alpers & Huehnerfuss 1988, JGR 93(C4) 3642, abstract); film "
-                "pressure not given by the source, set to 0"),
+                "near 8 Hz (Alpers & Huehnerfuss 1988, JGR 93(C4) 3642, abstract), typical "
+                "value; film pressure not given by the source, set to 0"),
         ranges={"elasticity": (0.005, 0.020)}),
     # Oil layers: suggested defaults inside the verified property ranges (films.md Sec. 8.5),
     # not measurements; thickness 10 micrometres (a continuous thin film) unless changed.
@@ -795,7 +795,7 @@ def _solve_film(prob, mode, method="auto"):
     sign = -1.0 if mode == "temporal" else 1.0
     sel = np.arange(n)
     ref, z0 = prob.guess(mode, sel)
-    z = np.full(n, np.nan + 0j)
+    z = np.full(n, complex(np.nan, np.nan))
     its = np.zeros(n, dtype=np.int64)
     todo = np.ones(n, dtype=bool)
     failed = np.zeros(n, dtype=bool)
@@ -931,8 +931,8 @@ def _solve_oil(prob, mode, method="auto"):
     Returns (z, iterations, continued, failed), processed in chunks to bound memory.
     """
     n = prob.x.size
-    out = (np.full(n, np.nan + 0j), np.zeros(n, dtype=np.int64), np.zeros(n, dtype=bool),
-           np.zeros(n, dtype=bool))
+    out = (np.full(n, complex(np.nan, np.nan)), np.zeros(n, dtype=np.int64),
+           np.zeros(n, dtype=bool), np.zeros(n, dtype=bool))
     for a in range(0, n, _OIL_CHUNK):
         sl = np.arange(a, min(n, a + _OIL_CHUNK))
         for arr, val in zip(out, _solve_oil_chunk(prob, mode, sl, method)):
@@ -1032,7 +1032,7 @@ def _solve(x, film, water, mode, method="auto", on_failure="raise", gravity=GRAV
             xf[i], e0[i], wd[i], kap[i], sig[i], rh[i], mu_[i], gravity), mode, method))]
     shape = arrs[0].shape
     n = xf.size
-    root = np.full(n, np.nan + 0j)
+    root = np.full(n, complex(np.nan, np.nan))
     its = np.zeros(n, dtype=np.int64)
     cont = np.zeros(n, dtype=bool)
     failed = np.zeros(n, dtype=bool)
@@ -1052,7 +1052,7 @@ def _solve(x, film, water, mode, method="auto", on_failure="raise", gravity=GRAV
             raise RootTrackingError(msg)
         import warnings
         warnings.warn(msg + "; NaN returned there", RuntimeWarning, stacklevel=3)
-        root[failed] = np.nan + 1j * np.nan
+        root[failed] = complex(np.nan, np.nan)
     info = {"iterations": its.reshape(shape), "continued": cont.reshape(shape),
             "failed": failed.reshape(shape)}
     return root.reshape(shape), info

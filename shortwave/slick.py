@@ -406,8 +406,8 @@ def contrast(film, frequency_hz=None, incidence_deg=None, wind_speed=None, *,
         if frequency_hz is None or incidence_deg is None:
             raise ShortwaveInputError("give frequency_hz and incidence_deg, or "
                                       "bragg_wavenumber")
-        _warn_incidence(incidence_deg)
         kb = checked_bragg_wavenumber(frequency_hz, incidence_deg)
+        _warn_incidence(incidence_deg)
     else:
         kb = _films._check_k(bragg_wavenumber, "bragg_wavenumber")
     if model == "alpers_huhnerfuss1989":

@@ -31,7 +31,7 @@ from ._checks import ShortwaveInputError, check_choice, check_positive
 
 __all__ = ["STATIONS", "GRAVITY", "PM_ALPHA", "PM_BETA", "PM_OMEGA_PEAK", "U195_OVER_U10",
            "geometric_frequencies", "jonswap", "cos2s_spreading", "wave_spectra",
-           "greyhaven_spectra", "greyhaven_spectra_grid", "packed_encoding"]
+           "greyhaven_spectra", "greyhaven_spectra_grid", "netcdf_encoding"]
 
 GRAVITY = 9.81
 """Gravity of the spectral forms [m s-2]."""
@@ -348,11 +348,10 @@ def greyhaven_spectra(n_times=8, *, start="2031-10-02T00:00", step_hours=3, stat
         {"spectrum": (("time", "station", "frequency", "direction"), E.astype(dtype)),
          "wind_speed": (("time", "station"), u.astype(dtype),
                         {"standard_name": "wind_speed", "long_name": "wind speed at 10 m",
-                         "units": "m s-1", "coordinates": "height"}),
+                         "units": "m s-1"}),
          "wind_direction": (("time", "station"), wd.astype(dtype),
                             {"standard_name": "wind_from_direction",
-                             "long_name": "direction the wind comes from", "units": "degree",
-                             "coordinates": "height"}),
+                             "long_name": "direction the wind comes from", "units": "degree"}),
          "depth": (("station",), np.array([s[3] for s in st]),
                    {"standard_name": "sea_floor_depth_below_sea_surface",
                     "long_name": "water depth", "units": "m", "positive": "down"})},
@@ -374,8 +373,6 @@ def greyhaven_spectra(n_times=8, *, start="2031-10-02T00:00", step_hours=3, stat
                          "cos-2s spreading plus swell, built from code",
                "featureType": "timeSeries",
                "comment": "Invented places and sea states; not observations."})
-    ds["spectrum"] = ds["spectrum"].assign_attrs()
-    ds["wind_speed"].encoding["coordinates"] = "height"
     return _finish(ds, f, theta, convention=convention, per_degree=per_degree,
                    direction_units=direction_units, bounds=frequency_bounds)
 
@@ -453,30 +450,37 @@ def greyhaven_spectra_grid(n_times=2, ny=3, nx=4, *, land=((0, 0),), fully_devel
                    direction_units="degree", bounds=False)
 
 
-def packed_encoding(ds, name="spectrum", nbits=16):
-    """Encoding that stores ``ds[name]`` packed as short integers (scale_factor/add_offset).
+def netcdf_encoding(ds, packed=False, name="spectrum"):
+    """Encoding for writing a synthetic Dataset to NetCDF like a wave model would.
 
     Parameters
     ----------
     ds : xarray.Dataset
+        From :func:`greyhaven_spectra` or :func:`greyhaven_spectra_grid`.
+    packed : bool
+        Store ``ds[name]`` as short integers with ``scale_factor`` and ``_FillValue``
+        (NaN cells become the fill value), as many wave-model files do.
     name : str
         Variable to pack.
-    nbits : int
-        16 (short).
 
     Returns
     -------
     dict
-        ``{name: {"dtype": "int16", "scale_factor": ..., "add_offset": 0.0,
-        "_FillValue": -32768}}`` for :func:`shortwave.ncio.write_netcdf` (``encoding=``).
+        For :func:`shortwave.ncio.write_netcdf` (``encoding=``): no ``_FillValue`` on
+        coordinate variables (CF 2.5.1), and the packing if asked.
 
     Examples
     --------
-    >>> enc = packed_encoding(greyhaven_spectra(1))
-    >>> enc["spectrum"]["dtype"]
-    'int16'
+    >>> enc = netcdf_encoding(greyhaven_spectra(1), packed=True)
+    >>> enc["spectrum"]["dtype"], "_FillValue" in enc["frequency"]
+    ('int16', True)
     """
-    vmax = float(np.nanmax(np.asarray(ds[name])))
-    scale = vmax / (2 ** (nbits - 1) - 2) if vmax > 0 else 1.0
-    return {name: {"dtype": "int16", "scale_factor": scale, "add_offset": 0.0,
-                   "_FillValue": np.int16(-(2 ** (nbits - 1))), "zlib": True}}
+    enc = {c: {"_FillValue": None} for c in ds.coords if ds[c].dtype.kind == "f"}
+    if "frequency_bounds" in ds:
+        enc["frequency_bounds"] = {"_FillValue": None}
+    if packed:
+        vmax = float(np.nanmax(np.asarray(ds[name])))
+        scale = vmax / 32766.0 if vmax > 0 else 1.0
+        enc[name] = {"dtype": "int16", "scale_factor": scale, "add_offset": 0.0,
+                     "_FillValue": np.int16(-32768), "zlib": True}
+    return enc

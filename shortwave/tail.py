@@ -76,7 +76,7 @@ __all__ = ["K_MAX", "POINTS_PER_DECADE", "TRANSITION_RATIO", "INVERSE_WAVE_AGE_R
            "TAIL_MODELS", "OUTPUTS", "frequency_edges", "wavenumber_grid",
            "transition_weight", "peak_inverse_wave_age", "extend_spectra",
            "prepare_inputs", "wind_inputs", "depth_input", "extend_dataset",
-           "count_spectra", "chunk_plan", "TAIL_METADATA"]
+           "count_spectra", "chunk_plan", "output_encoding", "spectrum_parts", "TAIL_METADATA"]
 
 K_MAX = 2000.0
 """Default upper wavenumber of the extended spectra [rad m-1].
@@ -417,7 +417,7 @@ def extend_spectra(E, frequency_hz, direction_deg, wind_speed, wind_direction_de
     >>> E = wave_spectra(f, th, 10.0, 270.0)           # fully developed, U10 = 10 m/s
     >>> r = extend_spectra(E, f, th, 10.0, 270.0)
     >>> round(float(r["hs"]), 2), round(float(r["mss_resolved"]), 4), round(float(r["mss"]), 3)
-    (2.24, 0.0109, 0.059)
+    (2.25, 0.0109, 0.056)
     """
     model = check_choice("model", model, TAIL_MODELS)
     convention = check_choice("convention", convention, ("from", "to"))
@@ -597,4 +597,723 @@ def extend_spectra(E, frequency_hz, direction_deg, wind_speed, wind_direction_de
     if parts:
         for key, v in part_arrays.items():
             out[key] = v.reshape(batch + (nk, nth))
+    return out
+
+
+# -----------------------------------------------------------------------------------------
+# NetCDF / xarray layer (imports xarray lazily; the core above is NumPy only)
+# -----------------------------------------------------------------------------------------
+
+_OUT_NAMES = {
+    "spectrum": "directional_spectrum", "curvature": "curvature_spectrum",
+    "hs": "significant_wave_height", "hs_resolved": "significant_wave_height_resolved",
+    "mss": "mean_square_slope", "mss_upwind": "mean_square_slope_upwind",
+    "mss_crosswind": "mean_square_slope_crosswind",
+    "mss_resolved": "mean_square_slope_resolved",
+    "mss_upwind_resolved": "mean_square_slope_upwind_resolved",
+    "mss_crosswind_resolved": "mean_square_slope_crosswind_resolved",
+    "mss_tail": "mean_square_slope_tail", "mss_upwind_tail": "mean_square_slope_upwind_tail",
+    "mss_crosswind_tail": "mean_square_slope_crosswind_tail",
+    "seam_wavenumber": "seam_wavenumber", "inverse_wave_age": "inverse_wave_age"}
+
+TAIL_METADATA = {
+    "directional_spectrum": {
+        "long_name": "wavenumber-direction spectrum of surface elevation F(k, theta): "
+                     "resolved wave-model part extended with a capillary-gravity tail",
+        "units": "m3 rad-1",
+        "comment": "cell averages over the wavenumber cells (wavenumber_bounds); the double "
+                   "integral over wavenumber and direction equals the elevation variance; "
+                   "below seam_wavenumber the wave-model spectrum with its direction of "
+                   "travel, above it the tail model (centrosymmetric for elfouhaily1997)"},
+    "curvature_spectrum": {
+        "long_name": "omnidirectional curvature (saturation) spectrum B(k) = k^3 S(k) of the "
+                     "extended spectrum", "units": "1"},
+    "significant_wave_height": {"standard_name": "sea_surface_wave_significant_height",
+                                "long_name": "significant wave height 4 sqrt(m0) of the "
+                                             "extended spectrum", "units": "m"},
+    "significant_wave_height_resolved": {
+        "long_name": "significant wave height 4 sqrt(m0) of the wave-model (resolved) "
+                     "spectrum", "units": "m"},
+    "mean_square_slope_resolved": {
+        "long_name": "mean square slope of the wave-model (resolved) spectrum", "units": "1",
+        "comment": "sum of k(f)^2 E(f, theta) df dtheta over the file's frequencies"},
+    "mean_square_slope_upwind_resolved": {
+        "long_name": "mean square slope along the wind of the wave-model (resolved) "
+                     "spectrum", "units": "1"},
+    "mean_square_slope_crosswind_resolved": {
+        "long_name": "mean square slope across the wind of the wave-model (resolved) "
+                     "spectrum", "units": "1"},
+    "mean_square_slope_tail": {"long_name": "mean square slope of the tail above "
+                                            "seam_wavenumber", "units": "1"},
+    "mean_square_slope_upwind_tail": {"long_name": "mean square slope along the wind of the "
+                                                   "tail above seam_wavenumber", "units": "1"},
+    "mean_square_slope_crosswind_tail": {
+        "long_name": "mean square slope across the wind of the tail above seam_wavenumber",
+        "units": "1"},
+    "seam_wavenumber": {"long_name": "wavenumber where the resolved spectrum ends and the "
+                                     "tail begins (k of the highest frequency bin edge)",
+                        "units": "rad m-1"},
+    "inverse_wave_age": {"long_name": "inverse wave age U10/c_p given to the tail model",
+                         "units": "1"},
+    "wavenumber_bounds": {"units": "rad m-1"},
+    "depth": {"standard_name": "sea_floor_depth_below_sea_surface",
+              "long_name": "water depth used for the dispersion relation", "units": "m"},
+}
+"""Attributes of the ``extend`` outputs that :data:`shortwave.metadata.OUTPUT_METADATA`
+lacks, or where the wavenumber-direction spectrum on geographic directions needs a more
+precise description; applied after that table."""
+
+
+def _direction_convention(dvar, given):
+    sn = dvar.attrs.get("standard_name", "")
+    if sn == "sea_surface_wave_from_direction":
+        conv = "from"
+    elif sn == "sea_surface_wave_to_direction":
+        conv = "to"
+    else:
+        conv = None
+    if given is not None:
+        given = check_choice("direction_convention", given, ("from", "to"))
+        return given
+    if conv is None:
+        raise ValueError(
+            f"direction axis {dvar.name!r} has no standard_name saying whether waves come "
+            "from or travel to its directions (sea_surface_wave_from_direction / "
+            "sea_surface_wave_to_direction); give the convention (--direction-convention "
+            "from|to)")
+    return conv
+
+
+def prepare_inputs(ds, *, overrides=None, units=None, direction_convention=None):
+    """Find the spectrum and its axes in ``ds``; sort and convert them.
+
+    Parameters
+    ----------
+    ds : xarray.Dataset
+        Wave-model output (any layout: (time, station, f, theta), (time, y, x, f, theta),
+        (node, f, theta), ...).
+    overrides : dict or iterable of "ROLE=NAME", optional
+        Explicit variable names for the roles ``spectrum``, ``frequency``, ``direction``.
+    units : dict, optional
+        ``role -> unit`` to assume instead of a missing or wrong ``units`` attribute.
+    direction_convention : {"from", "to"}, optional
+        Needed when the direction axis has no from/to standard_name.
+
+    Returns
+    -------
+    dict
+        ``spectrum`` (DataArray [m2 s rad-1], frequency and direction last and sorted),
+        ``frequency`` [Hz] and ``direction`` [degree, 0-360) (NumPy), ``frequency_bounds``
+        or None, ``frequency_dim``, ``direction_dim``, ``convention``, ``name`` (the
+        spectrum variable), ``batch_dims``.
+
+    Raises
+    ------
+    ValueError
+        Missing variables (named, with what was searched), unknown units, axes that are
+        not dimensions of the spectrum, repeated frequencies or directions.
+    """
+    from .ncio import convert_units, find_variable, parse_overrides, read_role
+    over = parse_overrides(overrides)
+    units = dict(units or {})
+    spec = read_role(ds, "spectrum", over, units.get("spectrum"))
+    name = spec.name
+    fvar = find_variable(ds, "frequency", over)
+    dvar = find_variable(ds, "direction", over)
+    for role, var in (("frequency", fvar), ("direction", dvar)):
+        if var.ndim != 1 or var.dims[0] not in spec.dims:
+            raise ValueError(f"{role} variable {var.name!r} (dimensions {var.dims}) is not an "
+                             f"axis of the spectrum {name!r} (dimensions {spec.dims})")
+    fdim, ddim = fvar.dims[0], dvar.dims[0]
+    if fdim == ddim:
+        raise ValueError(f"frequency {fvar.name!r} and direction {dvar.name!r} share the "
+                         f"dimension {fdim!r}")
+    conv = _direction_convention(dvar, direction_convention)
+    if "frequency" in units:
+        fvar = fvar.copy(deep=False)
+        fvar.attrs = {**fvar.attrs, "units": units["frequency"]}
+    if "direction" in units:
+        dvar = dvar.copy(deep=False)
+        dvar.attrs = {**dvar.attrs, "units": units["direction"]}
+    f_hz = convert_units(fvar, "s-1", f"{fvar.name} (frequency)")
+    f = np.asarray(f_hz.values, dtype=float)
+    th = np.mod(np.asarray(convert_units(dvar, "degree", f"{dvar.name} (direction)").values,
+                           dtype=float), 360.0)
+    if not np.all(np.isfinite(f)) or np.any(f <= 0):
+        raise ValueError(f"frequency {fvar.name!r}: values must be finite and > 0")
+    if not np.all(np.isfinite(th)):
+        raise ValueError(f"direction {dvar.name!r}: values must be finite")
+    bounds = None
+    bname = fvar.attrs.get("bounds")
+    if bname and bname in ds.variables:
+        scale = float(np.asarray(f_hz.values)[0] / np.asarray(fvar.values, float)[0])
+        b = np.asarray(ds[bname].values, dtype=float) * scale
+        if b.ndim == 2 and b.shape[1] != 2 and b.shape[0] == 2:
+            b = b.T
+        bounds = b
+    fo = np.argsort(f, kind="stable")
+    do = np.argsort(th, kind="stable")
+    if np.any(np.diff(f[fo]) <= 0):
+        raise ValueError(f"frequency {fvar.name!r}: repeated values")
+    ths = th[do]
+    if np.any(np.diff(ths) <= 1e-9) or ths[0] + 360.0 - ths[-1] <= 1e-9:
+        raise ValueError(f"direction {dvar.name!r}: repeated directions (modulo 360 degree)")
+    if np.any(fo != np.arange(f.size)):
+        spec = spec.isel({fdim: fo})
+        if bounds is not None:
+            bounds = bounds[fo]
+    if np.any(do != np.arange(th.size)):
+        spec = spec.isel({ddim: do})
+    batch = [d for d in spec.dims if d not in (fdim, ddim)]
+    spec = spec.transpose(*batch, fdim, ddim)
+    spec = spec.drop_vars([c for c in (fdim, ddim) if c in spec.coords])
+    return {"spectrum": spec, "frequency": f[fo], "direction": ths,
+            "frequency_bounds": bounds, "frequency_dim": fdim, "direction_dim": ddim,
+            "convention": conv, "name": name, "batch_dims": batch}
+
+
+def _align(da, spec, what):
+    """Select ``da`` at the spectrum's coordinates; refuse dimensions the spectrum lacks."""
+    for d in list(da.dims):
+        if d not in spec.dims:
+            if da.sizes[d] == 1:
+                da = da.isel({d: 0}, drop=True)
+                continue
+            raise ValueError(f"{what} {da.name!r} has the dimension {d!r} that the spectra do "
+                             f"not have (spectra dimensions: {spec.dims})")
+        if d in da.indexes and d in spec.indexes:
+            if not da.indexes[d].equals(spec.indexes[d]):
+                try:
+                    da = da.sel({d: spec.indexes[d]})
+                except KeyError:
+                    missing = spec.indexes[d].difference(da.indexes[d])
+                    raise ValueError(f"{what} {da.name!r} lacks {d} values of the spectra "
+                                     f"(e.g. {missing[0]!s})") from None
+        elif da.sizes[d] != spec.sizes[d]:
+            raise ValueError(f"{what} {da.name!r} has {da.sizes[d]} values along {d!r}, the "
+                             f"spectra {spec.sizes[d]}")
+    return da.drop_vars([c for c in da.coords if c not in da.dims], errors="ignore")
+
+
+def wind_inputs(ds, spec, *, wind=None, wind_speed=None, wind_direction=None,
+                overrides=None, units=None, source="input file"):
+    """Wind speed U10 [m s-1] and wind-from direction [degree] for each spectrum.
+
+    Parameters
+    ----------
+    ds : xarray.Dataset
+        The spectra's file.
+    spec : xarray.DataArray
+        The spectra (for alignment).
+    wind : xarray.Dataset, optional
+        Another file holding the wind (searched instead of ``ds``).
+    wind_speed, wind_direction : float, optional
+        Constants [m s-1], [degree from]; they take precedence over files.
+    overrides, units :
+        As in :func:`prepare_inputs` (roles ``wind_speed``, ``wind_direction``,
+        ``eastward_wind``, ``northward_wind``).
+    source : str
+        Words naming where the wind is searched, for messages and provenance.
+
+    Returns
+    -------
+    (speed, direction, provenance)
+        DataArrays (dims a subset of the spectra's) and a text.
+
+    Raises
+    ------
+    ValueError
+        Wind not found (naming what was searched) or not aligned with the spectra;
+        negative speeds.
+
+    Notes
+    -----
+    Lookup: the roles ``wind_speed`` and ``wind_direction`` (``wind_to_direction`` is
+    turned into "from" by adding 180 degree); else ``eastward_wind``/``northward_wind``:
+    speed = hypot(u, v), from-direction = atan2(-u, -v) in degrees (common practice).  A
+    direction variable found by name only (no standard_name) is read as "from", the
+    meteorological convention.
+    """
+    import xarray as xr
+
+    from .ncio import parse_overrides, read_role
+    over = parse_overrides(overrides)
+    units = dict(units or {})
+    src = wind if wind is not None else ds
+    prov = []
+    errors = []
+
+    def role(r):
+        try:
+            return read_role(src, r, over, units.get(r))
+        except ValueError as exc:
+            if r in over:
+                raise
+            errors.append(str(exc))
+            return None
+
+    speed = direction = None
+    if wind_speed is not None:
+        speed = xr.DataArray(float(wind_speed), name="wind_speed")
+        prov.append(f"wind speed {float(wind_speed):g} m s-1 (constant)")
+    if wind_direction is not None:
+        direction = xr.DataArray(float(wind_direction) % 360.0, name="wind_direction")
+        prov.append(f"wind from {float(wind_direction) % 360.0:g} degree (constant)")
+    if speed is None:
+        speed = role("wind_speed")
+        if speed is not None:
+            prov.append(f"wind speed from variable {speed.name!r} of the {source}")
+    if direction is None:
+        direction = role("wind_direction")
+        if direction is not None:
+            prov.append(f"wind direction from variable {direction.name!r} of the {source}")
+            if direction.attrs.get("standard_name") == "wind_to_direction":
+                direction = (direction + 180.0) % 360.0
+    if speed is None or direction is None:
+        u, v = role("eastward_wind"), role("northward_wind")
+        if u is not None and v is not None:
+            if speed is None:
+                speed = np.hypot(u, v).rename("wind_speed")
+                prov.append(f"wind speed from components {u.name!r}, {v.name!r} of the "
+                            f"{source}")
+            if direction is None:
+                direction = (np.degrees(np.arctan2(-u, -v)) % 360.0).rename("wind_direction")
+                prov.append(f"wind direction from components {u.name!r}, {v.name!r} of "
+                            f"the {source}")
+    for what, val, opt in (("wind speed", speed, "--wind-speed VALUE"),
+                           ("wind direction", direction, "--wind-direction DEGREES")):
+        if val is None:
+            found = "; ".join(e for e in errors if what.split()[1] in e or "wind" in e)
+            raise ValueError(f"{what} is needed for the tail but was not found in the "
+                             f"{source} ({found.split('; ')[0] if found else 'no match'}); "
+                             f"give {opt} or --wind-file FILE")
+    speed = _align(speed, spec, "wind speed")
+    direction = _align(direction, spec, "wind direction")
+    smin = float(speed.min()) if speed.size else 0.0
+    if smin < 0:
+        raise ValueError(f"wind speed {speed.name!r} has negative values (minimum {smin:g} "
+                         "m s-1)")
+    return speed, direction, "; ".join(prov)
+
+
+def depth_input(ds, spec, depth=None, *, overrides=None, units=None):
+    """Water depth [m] for each spectrum: a constant, ``"deep"``, or the file's variable.
+
+    Parameters
+    ----------
+    ds : xarray.Dataset
+    spec : xarray.DataArray
+    depth : None, float, or "deep"
+        None: the ``depth`` role of the file if present, else deep water.
+    overrides, units :
+        As in :func:`prepare_inputs`.
+
+    Returns
+    -------
+    (depth, provenance) : (xarray.DataArray, str)
+        NaN or inf mean deep water.
+
+    Raises
+    ------
+    ValueError
+        Depths <= 0 (naming the variable and the minimum found).
+    """
+    import xarray as xr
+
+    from .ncio import parse_overrides, read_role
+    over = parse_overrides(overrides)
+    if isinstance(depth, str) and depth.strip().lower() in ("deep", "inf", "infinite"):
+        return xr.DataArray(np.inf, name="depth"), "deep water"
+    if depth is not None:
+        d = float(depth)
+        if not d > 0:
+            raise ValueError(f"depth: must be > 0 m or 'deep', got {depth}")
+        return xr.DataArray(d, name="depth"), f"depth {d:g} m (constant)"
+    try:
+        da = read_role(ds, "depth", over, (units or {}).get("depth"))
+    except ValueError:
+        if "depth" in over:
+            raise
+        return xr.DataArray(np.inf, name="depth"), "deep water (no depth in the input file)"
+    da = _align(da, spec, "depth")
+    vmin = float(da.min()) if da.size else np.nan
+    if np.isfinite(vmin) and vmin <= 0:
+        raise ValueError(f"depth variable {da.name!r} has values <= 0 (minimum {vmin:g} m); "
+                         "depths must be positive down (sea floor below the surface)")
+    return da, f"depth from variable {da.name!r} of the input file (NaN read as deep water)"
+
+
+def chunk_plan(sizes, batch_dims, spectra_per_chunk=1000):
+    """Dask chunks holding about ``spectra_per_chunk`` spectra, spectral axes whole.
+
+    Parameters
+    ----------
+    sizes : mapping
+        Dimension sizes.
+    batch_dims : sequence of str
+        Dimensions along which spectra are stacked (outermost first).
+    spectra_per_chunk : int
+        Target number of spectra per chunk (>= 1).
+
+    Returns
+    -------
+    dict
+        ``dim -> chunk size`` for the batch dims (innermost whole while they fit).
+
+    Examples
+    --------
+    >>> chunk_plan({"time": 1000, "station": 10}, ["time", "station"], 1000)
+    {'time': 100, 'station': 10}
+    """
+    target = max(int(spectra_per_chunk), 1)
+    out = {}
+    inner = 1
+    for d in reversed(list(batch_dims)):
+        n = int(sizes[d])
+        if inner * n <= target:
+            out[d] = n
+            inner *= n
+        else:
+            out[d] = max(1, target // inner)
+            inner *= out[d]
+    return {d: out[d] for d in batch_dims}
+
+
+def extend_dataset(ds, *, overrides=None, units=None, direction_convention=None, wind=None,
+                   wind_speed=None, wind_direction=None, depth=None, model="elfouhaily1997",
+                   inverse_wave_age="peak", k_max=K_MAX, points_per_decade=POINTS_PER_DECADE,
+                   transition_ratio=TRANSITION_RATIO, water=None, keep_spectra=True,
+                   input_name=None, wind_source=None, **model_kw):
+    """Extend the spectra of a wave-model Dataset with a capillary-gravity tail.
+
+    Parameters
+    ----------
+    ds : xarray.Dataset
+        Wave-model output; dask-backed (chunked) datasets give a lazy result.
+    overrides, units, direction_convention :
+        See :func:`prepare_inputs`.
+    wind, wind_speed, wind_direction :
+        See :func:`wind_inputs`.
+    depth : None, float or "deep"
+        See :func:`depth_input`.
+    model, inverse_wave_age, k_max, points_per_decade, transition_ratio, water, **model_kw :
+        See :func:`extend_spectra`.
+    keep_spectra : bool
+        Include the extended spectra and curvature spectra (else only the moments).
+    input_name : str, optional
+        Name of the input file for the provenance attributes.
+    wind_source : str, optional
+        Name of the wind file for messages and provenance.
+
+    Returns
+    -------
+    xarray.Dataset
+        ``directional_spectrum`` (..., wavenumber, direction) [m3 rad-1],
+        ``curvature_spectrum`` (..., wavenumber) [1], significant wave heights and mean
+        square slopes (total, upwind, crosswind; ``_resolved`` and ``_tail``), the wind
+        and depth used, ``seam_wavenumber``, ``inverse_wave_age``; the input coordinates
+        (time, station, latitude, ...) and global attributes, CF attributes from
+        :data:`shortwave.metadata.OUTPUT_METADATA` and :data:`TAIL_METADATA`, and the
+        method and parameters as global attributes.
+
+    Examples
+    --------
+    >>> from shortwave.synthetic import greyhaven_spectra
+    >>> out = extend_dataset(greyhaven_spectra(2))
+    >>> dict(out["directional_spectrum"].sizes)
+    {'time': 2, 'station': 3, 'wavenumber': 226, 'direction': 36}
+    """
+    import xarray as xr
+
+    from . import __version__
+    from .metadata import apply_metadata
+    model = check_choice("model", model, TAIL_MODELS)
+    inp = prepare_inputs(ds, overrides=overrides, units=units,
+                         direction_convention=direction_convention)
+    spec = inp["spectrum"]
+    speed, wdir, wind_prov = wind_inputs(
+        ds, spec, wind=wind, wind_speed=wind_speed, wind_direction=wind_direction,
+        overrides=overrides, units=units,
+        source=f"wind file {wind_source}" if wind_source else
+        ("wind dataset" if wind is not None else "input file"))
+    dep, depth_prov = depth_input(ds, spec, depth, overrides=overrides, units=units)
+    f, th, conv = inp["frequency"], inp["direction"], inp["convention"]
+    fdim, ddim = inp["frequency_dim"], inp["direction_dim"]
+    kw = dict(convention=conv, frequency_bounds=inp["frequency_bounds"], k_max=k_max,
+              points_per_decade=points_per_decade, transition_ratio=transition_ratio,
+              model=model, inverse_wave_age=inverse_wave_age, water=water,
+              name=inp["name"], **model_kw)
+    if not isinstance(inverse_wave_age, str):
+        kw["inverse_wave_age"] = float(inverse_wave_age)
+    # grid of the output (same for every block): computed once here
+    probe = extend_spectra(np.zeros((1, f.size, th.size)), f, th, 10.0, 0.0,
+                           **{**kw, "inverse_wave_age": 0.84})
+    k, kb = probe["wavenumber"], probe["wavenumber_bounds"]
+    keys = list(OUTPUTS) if keep_spectra else list(OUTPUTS[2:])
+
+    def block(E, U, WD, H):
+        r = extend_spectra(E, f, th, U, WD, H, **kw)
+        return tuple(r[key] for key in keys)
+
+    core_out = {"spectrum": ["wavenumber", ddim], "curvature": ["wavenumber"]}
+    dtypes = {"spectrum": np.float32}
+    results = xr.apply_ufunc(
+        block, spec, speed, wdir, dep,
+        input_core_dims=[[fdim, ddim], [], [], []],
+        output_core_dims=[core_out.get(key, []) for key in keys],
+        dask="parallelized",
+        output_dtypes=[dtypes.get(key, np.float64) for key in keys],
+        dask_gufunc_kwargs={"output_sizes": {"wavenumber": k.size}},
+        keep_attrs=False)
+    out = xr.Dataset({_OUT_NAMES[key]: r for key, r in zip(keys, results)})
+    # coordinates: the input's that live on the spectra's other dimensions
+    batch = set(inp["batch_dims"])
+    coords = {c: ds.coords[c] for c in ds.coords
+              if set(ds.coords[c].dims) <= batch and c not in (fdim, ddim)}
+    out = out.assign_coords(coords)
+    out = out.assign_coords(
+        wavenumber=("wavenumber", k),
+        **{ddim: (ddim, th)})
+    out["wavenumber_bounds"] = (("wavenumber", "bounds"), kb)
+    out["wind_speed"] = speed.astype(float).broadcast_like(out["significant_wave_height"])
+    out["wind_from_direction"] = wdir.astype(float).broadcast_like(
+        out["significant_wave_height"])
+    if dep.ndim:
+        out["depth"] = dep.astype(float)
+    names = list(out.variables)
+    apply_metadata(out, names)
+    for name, attrs in TAIL_METADATA.items():
+        if name in out.variables:
+            out[name].attrs = dict(attrs)
+    out["wavenumber"].attrs["bounds"] = "wavenumber_bounds"
+    out[ddim].attrs = {
+        "standard_name": f"sea_surface_wave_{conv}_direction",
+        "long_name": ("direction the waves come from" if conv == "from" else
+                      "direction the waves travel to") + ", clockwise from north",
+        "units": "degree"}
+    for c in coords:
+        out[c].attrs = dict(ds.coords[c].attrs)
+        out[c].encoding = dict(ds.coords[c].encoding)
+    for name in out.data_vars:
+        out[name].encoding = {}
+    src = input_name or ds.encoding.get("source", "dataset")
+    attrs = dict(ds.attrs)
+    attrs.pop("Conventions", None)
+    mdesc = {"elfouhaily1997": "Elfouhaily et al. (1997), J. Geophys. Res. 102(C7), "
+                               "15781-15796"}.get(model, model)
+    attrs.update({
+        "title": f"Wave-model spectra extended with a capillary-gravity tail ({model})",
+        "source": f"shortwave {__version__} extend, from {src}",
+        "references": "Tail model: " + mdesc + "; f -> k: variance conservation with the "
+                      "capillary-gravity dispersion relation; Cox and Munk (1954), J. Opt. "
+                      "Soc. Am. 44, 838-850, for slope checks",
+        "comment": "Resolved spectrum kept below seam_wavenumber (each frequency bin mapped "
+                   "to its wavenumber interval, variance conserved, k^-3 inside the bin); "
+                   f"tail blended from the resolved level continued as k^-3 into the model "
+                   f"spectrum over [k_s, {float(transition_ratio):g} k_s] (raised cosine in "
+                   "ln k), model alone above.",
+        "tail_model": model,
+        "tail_transition_ratio": float(transition_ratio),
+        "tail_inverse_wave_age": (inverse_wave_age if isinstance(inverse_wave_age, str)
+                                  else float(inverse_wave_age)),
+        "wavenumber_max": float(kb[-1, 1]),
+        "wavenumber_points_per_decade": int(points_per_decade),
+        "input_file": str(src),
+        "input_spectrum_variable": str(inp["name"]),
+        "wind_source": wind_prov,
+        "depth_source": depth_prov,
+    })
+    if model_kw:
+        attrs["tail_model_options"] = ", ".join(f"{a}={b}" for a, b in model_kw.items())
+    out.attrs = attrs
+    return out
+
+
+def count_spectra(out):
+    """Counts for a summary: spectra, NaN input spectra, spectra without wind.
+
+    Parameters
+    ----------
+    out : xarray.Dataset
+        Result of :func:`extend_dataset` (computed or written and reopened).
+
+    Returns
+    -------
+    dict
+        ``spectra``, ``nan_spectra`` (NaN in the input spectrum), ``no_wind`` (valid
+        spectrum but NaN wind), ``extended``.
+
+    Examples
+    --------
+    >>> from shortwave.synthetic import greyhaven_spectra_grid
+    >>> count_spectra(extend_dataset(greyhaven_spectra_grid(1, 2, 2)))
+    {'spectra': 4, 'nan_spectra': 1, 'no_wind': 0, 'extended': 3}
+    """
+    hs = np.asarray(out["significant_wave_height"].values)
+    hr = np.asarray(out["significant_wave_height_resolved"].values)
+    nan_in = int(np.sum(np.isnan(hr)))
+    no_wind = int(np.sum(np.isnan(hs) & ~np.isnan(hr)))
+    return {"spectra": int(hs.size), "nan_spectra": nan_in, "no_wind": no_wind,
+            "extended": int(np.sum(np.isfinite(hs)))}
+
+
+def output_encoding(out, complevel=1):
+    """NetCDF encoding for :func:`extend_dataset` outputs: float32 spectra, light zlib,
+    no _FillValue on coordinates and bounds (CF: coordinates have no missing values)."""
+    enc = {}
+    for name, var in out.data_vars.items():
+        if var.dtype.kind == "f":
+            enc[name] = {"zlib": complevel > 0, "complevel": int(complevel)}
+    if "directional_spectrum" in out:
+        enc["directional_spectrum"]["dtype"] = "float32"
+        enc["directional_spectrum"]["shuffle"] = True
+    for name in list(out.coords) + ["wavenumber_bounds"]:
+        if name in out.variables and out[name].dtype.kind == "f":
+            enc[name] = {**enc.get(name, {}), "_FillValue": None}
+    return enc
+
+
+def _select_positions(ds, spec, batch_dims, select):
+    """Positions along the batch dims from ``DIM=VALUE`` or ``COORD=VALUE`` selections."""
+    pos = {}
+    for item in (select or []):
+        if "=" not in str(item):
+            raise ValueError(f"selection {item!r}: expected DIM=VALUE, e.g. "
+                             "station_name='Corrow Bank' or time=2031-10-02T06:00")
+        key, _, val = str(item).partition("=")
+        key, val = key.strip(), val.strip().strip("'\"")
+        if key in batch_dims:
+            dim, coord = key, (ds.coords[key] if key in ds.coords else None)
+        elif key in ds.coords and ds.coords[key].ndim == 1 and ds.coords[key].dims[0] in batch_dims:
+            dim, coord = ds.coords[key].dims[0], ds.coords[key]
+        else:
+            raise ValueError(f"selection {key}={val}: {key!r} is neither a dimension of the "
+                             f"spectra ({', '.join(batch_dims)}) nor a coordinate along one")
+        n = spec.sizes[dim]
+        found = None
+        if coord is not None:
+            values = coord.values
+            if np.issubdtype(values.dtype, np.datetime64):
+                try:
+                    t = np.datetime64(val)
+                    found = int(np.argmin(np.abs(values - t.astype(values.dtype))))
+                except ValueError:
+                    found = None
+            else:
+                hits = [i for i, v in enumerate(values) if str(v) == val]
+                if not hits:
+                    try:
+                        hits = [i for i, v in enumerate(values) if float(v) == float(val)]
+                    except (TypeError, ValueError):
+                        hits = []
+                found = hits[0] if hits else None
+        if found is None:
+            try:
+                found = int(val)
+            except ValueError:
+                raise ValueError(f"selection {key}={val}: no such value along {dim!r}") from None
+            if not -n <= found < n:
+                raise ValueError(f"selection {key}={val}: position out of range 0..{n - 1}")
+            found %= n
+        pos[dim] = found
+    for d in batch_dims:
+        pos.setdefault(d, 0)
+    return pos
+
+
+def spectrum_parts(ds, select=None, *, overrides=None, units=None, direction_convention=None,
+                   wind=None, wind_speed=None, wind_direction=None, depth=None,
+                   model="elfouhaily1997", inverse_wave_age="peak", k_max=K_MAX,
+                   points_per_decade=POINTS_PER_DECADE, transition_ratio=TRANSITION_RATIO,
+                   water=None, **model_kw):
+    """The extension of one chosen spectrum, split into its parts (for a figure).
+
+    Parameters
+    ----------
+    ds : xarray.Dataset
+        Wave-model output.
+    select : iterable of "DIM=VALUE", optional
+        Which spectrum: a dimension or a 1-D coordinate along it (e.g.
+        ``station_name=Corrow Bank``, ``time=2031-10-02T06:00`` (nearest), ``station=2``);
+        unspecified dimensions take their first position.
+    Other parameters :
+        As in :func:`extend_dataset`.
+
+    Returns
+    -------
+    dict
+        ``wavenumber`` [rad m-1]; curvature spectra B(k) [1] of the ``extended`` spectrum,
+        its ``resolved`` and ``tail`` parts and the pure ``model``; ``node_wavenumber``
+        and ``node_curvature``: the resolved spectrum converted point by point at the
+        frequency nodes (:func:`shortwave.spectrum.convert.frequency_to_wavenumber`);
+        ``seam_wavenumber``, ``transition_ratio``; the scalar moments of
+        :func:`extend_spectra`; ``wind_speed``; ``label`` describing the selection.
+
+    Raises
+    ------
+    ValueError
+        Bad selection, or the chosen spectrum is NaN or has no wind.
+
+    Examples
+    --------
+    >>> from shortwave.synthetic import greyhaven_spectra
+    >>> p = spectrum_parts(greyhaven_spectra(2), ["station_name=Corrow Bank"])
+    >>> p["label"]
+    'time=2031-10-02T00:00, station_name=Corrow Bank'
+    """
+    from .spectrum.convert import frequency_to_wavenumber, polar_to_omnidirectional
+    inp = prepare_inputs(ds, overrides=overrides, units=units,
+                         direction_convention=direction_convention)
+    spec = inp["spectrum"]
+    speed, wdir, _ = wind_inputs(ds, spec, wind=wind, wind_speed=wind_speed,
+                                 wind_direction=wind_direction, overrides=overrides,
+                                 units=units)
+    dep, _ = depth_input(ds, spec, depth, overrides=overrides, units=units)
+    pos = _select_positions(ds, spec, inp["batch_dims"], select)
+    sub = {d: pos[d] for d in inp["batch_dims"]}
+    e = np.asarray(spec.isel(sub).values, dtype=float)
+
+    def pick(da):
+        return float(np.asarray(da.isel({d: pos[d] for d in da.dims}).values))
+
+    u, wd, h = pick(speed), pick(wdir), pick(dep)
+    labels = []
+    for d in inp["batch_dims"]:
+        names = [c for c in ds.coords if ds.coords[c].dims == (d,)]
+        name = next((c for c in names if c != d), names[0] if names else None)
+        if name is None:
+            labels.append(f"{d}={pos[d]}")
+        else:
+            v = ds.coords[name].values[pos[d]]
+            if np.issubdtype(np.asarray(v).dtype, np.datetime64):
+                v = np.datetime_as_string(v, unit="m")
+            labels.append(f"{name}={v}")
+    label = ", ".join(labels)
+    if not np.all(np.isfinite(e)):
+        raise ValueError(f"the selected spectrum ({label}) has NaN values (land or missing "
+                         "data); choose another")
+    if not (np.isfinite(u) and np.isfinite(wd)):
+        raise ValueError(f"the selected spectrum ({label}) has no wind")
+    f, th = inp["frequency"], inp["direction"]
+    r = extend_spectra(e, f, th, u, wd, h, convention=inp["convention"],
+                       frequency_bounds=inp["frequency_bounds"], k_max=k_max,
+                       points_per_decade=points_per_decade,
+                       transition_ratio=transition_ratio, model=model,
+                       inverse_wave_age=inverse_wave_age, water=water, parts=True,
+                       name=inp["name"], **model_kw)
+    k = r["wavenumber"]
+
+    def curv(F):
+        return k**3 * np.asarray(polar_to_omnidirectional(F, th))
+
+    Fn, kn = frequency_to_wavenumber(e, f, th, depth=h if np.isfinite(h) else np.inf,
+                                     water=water)
+    out = {key: r[key] for key in OUTPUTS[2:]}
+    out.update({"wavenumber": k, "extended": np.asarray(r["curvature"]),
+                "resolved": curv(r["resolved_spectrum"]), "tail": curv(r["tail_spectrum"]),
+                "model": curv(r["model_spectrum"]), "node_wavenumber": np.asarray(kn),
+                "node_curvature": np.asarray(kn) ** 3 * np.asarray(
+                    polar_to_omnidirectional(Fn, th)),
+                "transition_ratio": float(transition_ratio), "wind_speed": u,
+                "model_name": model, "label": label})
     return out

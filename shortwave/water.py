@@ -330,7 +330,10 @@ class Water(Liquid):
             ``"meissner_wentz2004"`` (default) or ``"klein_swift1977"``.
         """
         from .permittivity import permittivity
-        return permittivity(frequency_hz, self.temperature_c, self.salinity, model=model)
+        # Both permittivity models use practical salinity (psu); S_P = S_A * 35 / 35.16504
+        # for reference-composition sea water (IOC et al. 2010, Eq. 2.4.1).
+        practical = np.asarray(self.salinity) * (35.0 / 35.16504)
+        return permittivity(frequency_hz, self.temperature_c, practical, model=model)
 
     def __repr__(self):
         return (f"Water(temperature_c={self.temperature_c!r}, salinity={self.salinity!r}, "

@@ -253,9 +253,12 @@ def test_arrays_broadcast_and_scalars_stay_scalars():
         assert isinstance(getattr(s, name), float)
 
 
-def test_water_permittivity_delegates_to_the_permittivity_module():
+def test_water_permittivity_delegates_with_practical_salinity():
+    # Water holds Absolute Salinity; both permittivity models take practical salinity:
+    # S_P = S_A * 35 / 35.16504 (IOC et al. 2010, TEOS-10 manual Eq. 2.4.1).
     from shortwave.permittivity import permittivity
+    sp = 35.0 * 35.0 / 35.16504
     w = Water(20.0, 35.0)
-    assert w.permittivity(5.3e9) == permittivity(5.3e9, 20.0, 35.0)
+    assert w.permittivity(5.3e9) == permittivity(5.3e9, 20.0, sp)
     assert (w.permittivity(1.4e9, model="klein_swift1977")
-            == permittivity(1.4e9, 20.0, 35.0, model="klein_swift1977"))
+            == permittivity(1.4e9, 20.0, sp, model="klein_swift1977"))

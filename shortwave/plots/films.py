@@ -58,7 +58,7 @@ def damping_ratio_figure(k, ratio, path, *, bragg_marks=None, highlight=None, ti
             if not (np.isfinite(kb) and k.min() <= kb <= k.max()):
                 continue
             ax.axvline(kb, **style)
-            ax.text(kb, ymax * 1.02, f" {lab}", rotation=90, va="bottom", ha="center",
+            ax.text(kb, ymax * 1.02, f"{lab} ", rotation=90, va="top", ha="right",
                     fontsize=8, color=style["color"])
     ax.axhline(1.0, color="0.3", lw=0.8)
     ax.set_xscale("log")

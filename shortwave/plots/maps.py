@@ -165,3 +165,57 @@ def scene_panels(fields, path, *, land=None, suptitle=None, ncols=2):
         fig.suptitle(suptitle)
     fig.tight_layout()
     return save_figure(fig, path)
+
+
+def scene_overview(products, path, *, title=None):
+    """Maps of a scene's products: wind, NRCS, Bragg wavelength and slick contrast.
+
+    Parameters
+    ----------
+    products : xarray.Dataset
+        Output of :func:`shortwave.fields.scene_products` (2-D fields; for more
+        dimensions the first index of the leading ones is shown).
+    path : str
+        PNG file to write.
+    title : str, optional
+        Title above the panels (default: the dataset's ``title``).
+
+    Returns
+    -------
+    str
+        The path written.
+    """
+    def two_d(da):
+        while da.ndim > 2:
+            da = da.isel({da.dims[0]: 0})
+        return da
+
+    land = None
+    if "wind_speed" in products:
+        land = ~np.isfinite(np.asarray(two_d(products["wind_speed"]).values, dtype=float))
+    panels = []
+    if "wind_speed" in products:
+        panels.append((two_d(products["wind_speed"]), {"cmap": "viridis",
+                                                       "title": "wind speed U10"}))
+    if "sigma0_db" in products:
+        panels.append((two_d(products["sigma0_db"]), {"cmap": "gray",
+                                                      "title": "NRCS, clean sea [dB]"}))
+    if "sigma0_slick_db" in products:
+        s = two_d(products["sigma0_db"])
+        lo, hi = np.nanpercentile(np.asarray(s.values, dtype=float), [1, 99]) \
+            if np.isfinite(s.values).any() else (None, None)
+        panels.append((two_d(products["sigma0_slick_db"]),
+                       {"cmap": "gray", "vmin": lo, "vmax": hi,
+                        "title": "NRCS with the film [dB]"}))
+    if "slick_contrast_db" in products:
+        panels.append((two_d(products["slick_contrast_db"]),
+                       {"cmap": "magma", "title": "slick contrast [dB] (screening estimate)"}))
+    elif "bragg_wavelength" in products:
+        b = two_d(products["bragg_wavelength"]) * 100.0
+        b.attrs = {"units": "cm", "long_name": "Bragg wavelength"}
+        panels.append((b, {"cmap": "cividis", "title": "Bragg wavelength [cm]"}))
+    if not panels:
+        raise ValueError("scene_overview: the dataset has none of the scene products")
+    return scene_panels(panels, path, land=land,
+                        suptitle=title or products.attrs.get("title"),
+                        ncols=2 if len(panels) > 1 else 1)

@@ -416,7 +416,7 @@ def frequency_significant_wave_height(E, frequency_hz, direction_deg=None, **kw)
 
 def frequency_mean_square_slope(E, frequency_hz, direction_deg=None, k_min=None, k_max=None,
                                 wind_direction_deg=0.0, component="total", *, depth=np.inf,
-                                water=None, method="bins", bounds=None):
+                                water=None, method="bins", bounds=None, gravity=None):
     """Mean square slope of a frequency spectrum, with k(f) from the dispersion relation.
 
     Parameters
@@ -432,6 +432,8 @@ def frequency_mean_square_slope(E, frequency_hz, direction_deg=None, k_min=None,
         Water depth [m] (``np.inf`` deep water) for k(f).
     water : Water or Liquid, optional
         Liquid for the capillary-gravity dispersion relation (default sea water).
+    gravity : float, optional
+        [m s-2]; default :data:`shortwave.dispersion.GRAVITY`.
 
     Returns
     -------
@@ -447,10 +449,11 @@ def frequency_mean_square_slope(E, frequency_hz, direction_deg=None, k_min=None,
     >>> round(float(mss / 0.05), 5)   # k(0.1 Hz)^2 = (0.04026 rad/m)^2, deep water
     0.00162
     """
-    from ..dispersion import wavenumber
+    from ..dispersion import GRAVITY, wavenumber
     component = check_choice("component", component, _COMPONENTS)
     E, f, w, wth = _f_weighted(E, frequency_hz, direction_deg, method, bounds)
-    k = np.asarray(wavenumber(2 * np.pi * f, water, depth), dtype=float)
+    k = np.asarray(wavenumber(2 * np.pi * f, water, depth,
+                              GRAVITY if gravity is None else gravity), dtype=float)
     w = w * k**2 * _range_mask(k, k_min, k_max)
     if wth is None:
         if component != "total":

@@ -33,11 +33,12 @@ def _clean_over_lamb():
 
 
 def _inextensible_ratio(freq_hz):
-    """y(E = 10 N/m) over the Lamb/Lucassen formula sqrt(omega/nu) / (4 sqrt 2 k)."""
+    """y(E = 1e4 N/m, i.e. E -> infinity) over the Lamb/Lucassen formula
+    sqrt(omega/nu) / (4 sqrt 2 k)."""
     w = _sea_20c()
     om = 2.0 * np.pi * freq_hz
     k = float(F.wavenumber(om, w))
-    y = F.damping_ratio_at_frequency(freq_hz, F.Monolayer(elasticity=10.0), w)
+    y = F.damping_ratio_at_frequency(freq_hz, F.Monolayer(elasticity=1e4), w)
     return y / (np.sqrt(om / w.kinematic_viscosity) / (4.0 * np.sqrt(2.0) * k))
 
 
@@ -100,13 +101,13 @@ CHECKS = [
           "(1969) relation (films.md Sec. 6.2; regression, not a measurement)", rtol=1e-4,
           tolerance_reason="reference printed to 5 digits"),
     Check("films.inextensible.2Hz",
-          "spatial damping ratio for E -> infinity (10 N/m) over sqrt(omega/nu)/(4 sqrt2 k), "
+          "spatial damping ratio for E -> infinity (1e4 N/m) over sqrt(omega/nu)/(4 sqrt2 k), "
           "2 Hz, sea water 20 degC", "1", lambda: _inextensible_ratio(2.0), 1.0,
           "Lamb (1932) Art. 351; Lucassen (1968): inextensible film Gamma = k sqrt(nu omega "
           "/ 8) (from memory)", rtol=0.08, tolerance_reason="leading-order formula; the "
           "exact clean damping is below 2 nu k^2, so the ratio is a few % higher"),
     Check("films.inextensible.10Hz",
-          "spatial damping ratio for E -> infinity (10 N/m) over sqrt(omega/nu)/(4 sqrt2 k), "
+          "spatial damping ratio for E -> infinity (1e4 N/m) over sqrt(omega/nu)/(4 sqrt2 k), "
           "10 Hz, sea water 20 degC", "1", lambda: _inextensible_ratio(10.0), 1.0,
           "Lamb (1932) Art. 351; Lucassen (1968): inextensible film Gamma = k sqrt(nu omega "
           "/ 8) (from memory)", rtol=0.12, tolerance_reason="leading-order formula, 9 % "
