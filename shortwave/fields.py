@@ -71,6 +71,10 @@ CONTRAST_MODELS = ("two-scale", "balance", "alpers_huhnerfuss1989")
 ``"alpers_huhnerfuss1989"`` sigma0_slick = sigma0 / y(K_B)
 """
 
+DB_UNITS = "0.1 lg(re 1)"
+"""Units written for decibel outputs: the UDUNITS form of the decibel of a ratio, which
+CF checkers accept (plain ``dB`` is not a UDUNITS unit); ``long_name`` says decibels."""
+
 FILM_COVERS = ("auto", "mask", "everywhere")
 """Where the film is (``cover=``): ``"mask"`` the cells of the slick mask / positive film
 thickness; ``"everywhere"`` every sea cell (a what-if map of how visible the film would
@@ -166,16 +170,21 @@ class Scene:
         Role -> where it came from (variable name in the file, or a description).
     attrs : dict
         Global attributes of the input.
-    coords : dict
-        Coordinates of the input grid (kept on the outputs).
     path : str or None
         Input file.
+    coords : dict
+        Coordinates of the input wind field (dimension, auxiliary such as 2-D latitude
+        and longitude, and scalar ones such as time), kept on the outputs.
+    grid_mapping : xarray.DataArray or None
+        The CF grid-mapping variable of the input wind, if any.
     """
 
     inputs: object
     names: dict
     attrs: dict = field(default_factory=dict)
     path: str | None = None
+    coords: dict = field(default_factory=dict)
+    grid_mapping: object = None
 
     @property
     def dims(self):
@@ -216,7 +225,7 @@ def _find(ds, role, overrides):
 
 
 def _convert(da, role, target):
-    name = f"{da.name} ({role})"
+    name = str(da.name) if str(da.name) == role else f"{da.name} ({role})"
     return ncio.convert_units(da, target, name)
 
 
@@ -267,7 +276,8 @@ def swath_incidence_field(template, near_deg, far_deg, across_dim=None):
     if dim is None or dim not in template.dims:
         raise ShortwaveInputError(f"across_dim: {dim!r} is not a dimension of the scene "
                                   f"({', '.join(template.dims) or 'none'})")
-    for name, v in (("near_deg", near_deg), ("far_deg", far_deg)):
+    for name, v in (("swath near-edge incidence", near_deg),
+                    ("swath far-edge incidence", far_deg)):
         check_range(name, v, 0.0, 90.0, inclusive=(False, False), allow_nan=False,
                     unit="degree")
     n = template.sizes[dim]
@@ -322,8 +332,10 @@ def open_scene(source, *, overrides=None, chunks=None, swath=None, across_dim=No
     Notes
     -----
     The wind direction relative to the look, ``wind_azimuth = wind_from_direction -
-    sensor_azimuth`` (0 when the wind blows from the radar's side toward it: upwind),
-    follows the package convention of :func:`shortwave.radar.nrcs`.
+    look_azimuth`` with ``look_azimuth = sensor_azimuth_angle - 180`` (the radar looks
+    from itself toward the cell), follows the package convention of
+    :func:`shortwave.radar.nrcs`: 0 when the wind comes from the direction the radar
+    looks at, i.e. blows toward the radar (upwind); 180 when it blows away (downwind).
 
     Examples
     --------
@@ -361,7 +373,7 @@ def open_scene(source, *, overrides=None, chunks=None, swath=None, across_dim=No
         _check_same_grid([(uu, "eastward_wind"), (vv, "northward_wind")])
         wind = np.hypot(uu, vv)
         wind_from = (np.rad2deg(np.arctan2(-uu, -vv))) % 360.0
-        names["wind"] = f"{u.name}, {v.name} (eastward, northward components)"
+        names["wind"] = f"{u.name} + {v.name}"
         wind_src = [(u, "eastward_wind"), (v, "northward_wind")]
     elif speed is not None:
         if wdir is None:
@@ -374,7 +386,7 @@ def open_scene(source, *, overrides=None, chunks=None, swath=None, across_dim=No
                 "to_direction" in str(wdir.name):
             wd = wd + 180.0
         wind_from = wd % 360.0
-        names["wind"] = f"{speed.name}, {wdir.name} (speed, direction)"
+        names["wind"] = f"{speed.name} + {wdir.name}"
         wind_src = [(speed, "wind_speed"), (wdir, "wind_direction")]
     else:
         raise ValueError(
@@ -423,7 +435,9 @@ def open_scene(source, *, overrides=None, chunks=None, swath=None, across_dim=No
         raise ValueError("radar look direction missing: give --look-azimuth DEG (direction "
                          "the radar looks, clockwise from north) or a sensor_azimuth_angle "
                          "variable")
-    azimuth = (wind_from - sensor_az) % 360.0
+    # the radar looks along sensor_azimuth - 180; upwind (0) when the wind comes from the
+    # direction the radar looks at, i.e. blows toward the radar
+    azimuth = (wind_from - sensor_az + 180.0) % 360.0
 
     # --- water -------------------------------------------------------------------------
     data = {"wind_speed": wind, "wind_azimuth": azimuth, "incidence_angle": inc}
@@ -459,6 +473,14 @@ def open_scene(source, *, overrides=None, chunks=None, swath=None, across_dim=No
         grid.append((thick, "film_thickness"))
 
     _check_same_grid(grid)
+    ref = wind_src[0][0]
+    keep = {name: c.variable for name, c in ref.coords.items()
+            if set(c.dims) <= set(wind.dims)}
+    gm = None
+    gm_name = ref.attrs.get("grid_mapping")
+    if isinstance(gm_name, str) and gm_name in ds.variables:
+        gm = ds[gm_name].reset_coords(drop=True).variable
+        gm = (gm_name, gm)
     clean = {}
     for key, da in data.items():
         da = da.copy(deep=False) if hasattr(da, "copy") else da
@@ -468,7 +490,8 @@ def open_scene(source, *, overrides=None, chunks=None, swath=None, across_dim=No
     for dim in inputs.dims:
         if dim in ds.coords and dim not in inputs.coords:
             inputs = inputs.assign_coords({dim: ds.coords[dim]})
-    return Scene(inputs=inputs, names=names, attrs=dict(ds.attrs), path=path)
+    return Scene(inputs=inputs, names=names, attrs=dict(ds.attrs), path=path, coords=keep,
+                 grid_mapping=gm)
 
 
 def _check_same_grid(items):
@@ -504,7 +527,7 @@ _LIMITS = {
     "incidence_angle": (0.0, 90.0, (False, False), "degree"),
     "temperature_c": (-5.0, 45.0, (True, True), "degC"),
     "salinity": (0.0, 50.0, (True, True), "g kg-1"),
-    "slick_mask": (0.0, 1.0, (True, True), "1"),
+    "slick_mask": (0.0, 1.0, (True, True), ""),
     "film_thickness": (0.0, 0.05, (True, True), "m"),
 }
 
@@ -588,9 +611,10 @@ def scan_scene(scene, min_wind_speed=0.5):
                 lb = "[" if inclusive[0] else "("
                 rb = "]" if inclusive[1] else ")"
                 hint = _hint(key, mn, mx)
+                u = f" {unit}" if unit else ""
                 raise ShortwaveInputError(
-                    f"{src}: values from {mn:g} to {mx:g} {unit} are outside the valid range "
-                    f"{lb}{lo:g}, {hi:g}{rb} {unit}{hint}")
+                    f"{src}: values from {mn:g} to {mx:g}{u} are outside the valid range "
+                    f"{lb}{lo:g}, {hi:g}{rb}{u}{hint}")
     if got["wind_speed.finite"] == 0:
         raise ShortwaveInputError(f"{_source_name(scene, 'wind_speed')}: every cell is "
                                   "missing (NaN): nothing to compute")
@@ -607,7 +631,7 @@ def _source_name(scene, key):
             "temperature_c": "sea surface temperature", "salinity": "sea surface salinity",
             "incidence_angle": "incidence angle", "slick_mask": "slick mask",
             "film_thickness": "film thickness"}.get(key, key)
-    return f"{what} ({where})" if where else what
+    return f"{what} (from {where})" if where else what
 
 
 def _hint(key, mn, mx):
@@ -630,16 +654,22 @@ def _hint(key, mn, mx):
 # The per-cell kernel
 # ---------------------------------------------------------------------------------------
 
-_MSS_WIND_NODES = 64
+MSS_WIND_STEP = 0.02
+"""Wind step [m s-1] of the lattice on which the mean square slope is tabulated and then
+interpolated linearly per cell.  The lattice is anchored at multiples of the step, so the
+result of a cell does not depend on how the scene is split into chunks."""
+
+MSS_SLICK_WIND_STEP = 0.1
+"""Wind step [m s-1] of the lattice for the film-covered mean square slope."""
+
 _MSS_POINTS = 801
 
 
-def _wind_grid(u, nodes=_MSS_WIND_NODES):
-    """Nodes spanning the finite winds of ``u`` (at most ``nodes``, at least 2)."""
-    lo, hi = float(np.min(u)), float(np.max(u))
-    if hi - lo < 1e-9:
-        return np.array([lo, lo + 1e-3])
-    return np.linspace(lo, hi, nodes)
+def _wind_lattice(u, step):
+    """Lattice nodes (multiples of ``step``, all > 0) spanning the winds ``u``."""
+    lo = max(1, int(np.floor(float(np.min(u)) / step)))
+    hi = max(lo + 1, int(np.ceil(float(np.max(u)) / step)))
+    return np.arange(lo, hi + 1) * step
 
 
 def _film_factor(film, water):
@@ -725,7 +755,7 @@ class _Kernel:
                                         spectrum_model=self.spectrum_model, water=self.water,
                                         permittivity=eps), dtype=float)
             res["sigma0"][idx] = sig
-            grid = _wind_grid(uu)
+            grid = _wind_lattice(uu, MSS_WIND_STEP)
             mss = np.asarray(spectrum.mean_square_slope(grid, model=self.spectrum_model,
                                                         n=_MSS_POINTS))
             res["mean_square_slope"][idx] = np.interp(uu, grid, mss)
@@ -778,7 +808,7 @@ class _Kernel:
                     slick_sig[c] = sig[c] / kk
                     mss_model = ("balance" if self.contrast_model == "balance"
                                  else "alpers_huhnerfuss1989")
-                grid = _wind_grid(uu[c], nodes=24)
+                grid = _wind_lattice(uu[c], MSS_SLICK_WIND_STEP)
                 m = np.asarray(slick.damped_mean_square_slope(
                     grid, film_c, mss_model, self.water, n=_MSS_POINTS,
                     spectrum_model=self.spectrum_model))
@@ -946,6 +976,20 @@ def scene_products(scene, frequency_hz, polarization="VV", film=None, *, cover="
             out[name].attrs["polarization"] = pol
     for name, coord in ins.coords.items():
         out = out.assign_coords({name: coord})
+    for name, var in scene.coords.items():
+        if name not in out.coords:
+            out = out.assign_coords({name: var})
+    for name in out.data_vars:
+        if name.endswith("_db"):
+            # UDUNITS has no "dB"; decibels of a ratio are "0.1 lg(re 1)" (CF 1.10 Sect. 3.1)
+            out[name].attrs["units"] = DB_UNITS
+            out[name].attrs["long_name"] = out[name].attrs.get("long_name", name)
+    if scene.grid_mapping is not None:
+        gm_name, gm_var = scene.grid_mapping
+        out[gm_name] = gm_var
+        for name in list(out.data_vars):
+            if name != gm_name and out[name].ndim >= 2:
+                out[name].attrs["grid_mapping"] = gm_name
     wl = float(radar.radar_wavelength(f))
     out = out.assign_coords(
         radar_frequency=xr.DataArray(f, attrs=_metadata("radar_frequency")),
@@ -987,6 +1031,9 @@ def scene_products(scene, frequency_hz, polarization="VV", film=None, *, cover="
             "comment": CAUTION,
         })
     out.attrs = attrs
+    for name in out.coords:
+        if name in out.dims or not np.issubdtype(out[name].dtype, np.floating):
+            out[name].encoding["_FillValue"] = None
     return out
 
 
@@ -1075,3 +1122,9 @@ def _check_output(output, inputs, overwrite):
         raise OSError(f"output folder {folder} does not exist")
     if not os.access(folder, os.W_OK):
         raise OSError(f"output folder {folder} is not writable")
+    import tempfile
+    try:                                   # a real probe: permissions, read-only mounts
+        with tempfile.TemporaryFile(dir=folder):
+            pass
+    except OSError as exc:
+        raise OSError(f"output folder {folder} is not writable ({exc.strerror})") from None

@@ -644,19 +644,22 @@ def _check_k(k, name="k"):
     return k
 
 
-def _check_omega(omega, water, name="omega"):
-    """Check an angular frequency against the wavenumber range of the solvers."""
-    om = check_positive(name, omega, unit="rad s-1")
+def _check_omega(omega, water, name="omega", hz=False):
+    """Check an angular frequency (or, with ``hz``, a frequency) against the valid range."""
+    x = check_positive(name, omega, unit="Hz" if hz else "rad s-1")
+    om = 2 * np.pi * x if hz else x
     w = as_liquid(water)
-    lo = np.asarray(angular_frequency(K_RANGE[0], w))
-    hi = np.asarray(angular_frequency(K_RANGE[1], w))
+    lo = np.min(np.asarray(angular_frequency(K_RANGE[0], w)))
+    hi = np.max(np.asarray(angular_frequency(K_RANGE[1], w)))
     v = om[np.isfinite(om)]
-    if v.size and (v.min() < np.min(lo) or v.max() > np.max(hi)):
+    if v.size and (v.min() < lo or v.max() > hi):
+        side = "below" if v.min() < lo else "above"
+        bad = v.min() if side == "below" else v.max()
+        scale, unit = (2 * np.pi, "Hz") if hz else (1.0, "rad s-1")
         raise ShortwaveInputError(
-            f"{name}: {v.min():.4g}..{v.max():.4g} rad s-1 is outside the valid range of "
-            f"film damping, {np.min(lo):.3g}..{np.max(hi):.4g} rad s-1 "
-            f"({np.min(lo) / (2 * np.pi):.2f}..{np.max(hi) / (2 * np.pi):.0f} Hz, "
-            f"wavenumbers {K_RANGE[0]:g}..{K_RANGE[1]:g} rad m-1)")
+            f"{name}: {bad / scale:.4g} {unit} is {side} the valid range of film damping, "
+            f"{lo / scale:.3g}..{hi / scale:.4g} {unit} (wavenumbers {K_RANGE[0]:g}.."
+            f"{K_RANGE[1]:g} rad m-1)")
     return om
 
 
@@ -1082,7 +1085,8 @@ def complex_frequency(k, film=None, water=None, *, method="auto", on_failure="ra
     method : {"auto", "continuation"}
         ``"auto"``: Newton from the first-order estimate, with continuation in E only where
         needed; ``"continuation"``: always switch the film on gradually (slower; the
-        reference the fast path is tested against).
+        reference the fast path is tested against).  Oil layers are always followed
+        from their thin-layer limit by continuation in thickness where needed.
     on_failure : {"raise", "nan"}
         Where the root cannot be followed: raise :class:`RootTrackingError` (default), or
         return NaN there and warn (``RuntimeWarning``).
@@ -1256,8 +1260,7 @@ def damping_ratio_at_frequency(frequency_hz, film, water=None):
     ...                                        Water(20, 35))), 1)
     11.2
     """
-    f = check_positive("frequency_hz", frequency_hz, unit="Hz")
-    om = _check_omega(2 * np.pi * f, water, name="frequency_hz (as omega)")
+    om = _check_omega(frequency_hz, water, name="frequency_hz", hz=True)
     if film is None:
         raise ShortwaveInputError("film: a film is required for a damping ratio")
     num = np.asarray(complex_wavenumber(om, film, water)).imag

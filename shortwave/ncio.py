@@ -68,6 +68,12 @@ def history_line(command=None):
     return f"{now}: {command}"
 
 
+def _umask():
+    mask = os.umask(0o022)
+    os.umask(mask)
+    return mask
+
+
 def write_netcdf(ds, path, *, inputs=(), overwrite=False, command=None, encoding=None,
                  compute=True):
     """Write an xarray Dataset to NetCDF-4 atomically, with CF global attributes.
@@ -131,6 +137,7 @@ def write_netcdf(ds, path, *, inputs=(), overwrite=False, command=None, encoding
                                dir=folder)
     os.close(fd)
     try:
+        os.chmod(tmp, 0o666 & ~_umask())   # mkstemp makes 0600; give the usual permissions
         if callable(compute):
             delayed = out.to_netcdf(tmp, engine="netcdf4", format="NETCDF4", encoding=enc,
                                     compute=False)

@@ -32,6 +32,10 @@ WIND_FROM_DEG = 285.0
 WIND_SPEED = 9.0
 """Open-water wind speed [m s-1] (U10)."""
 
+ORIGIN = (48.85, -31.60)
+"""Latitude and longitude [degree] of the scene's south-west corner: an invented place in
+open water, shared with the invented wave-model stations of :mod:`shortwave.synthetic`."""
+
 SENSOR_AZIMUTH_DEG = 270.0
 """Direction from each cell to the radar [degree clockwise from north]: the radar is west
 and looks east (look azimuth 90 degrees)."""
@@ -135,7 +139,8 @@ def greyhaven_scene(size="full", *, wind_form="components"):
         [degree], ``sensor_azimuth_angle`` [degree], ``sea_surface_temperature`` [K],
         ``sea_surface_salinity`` [1e-3], ``slick_mask`` (1 inside the Mistle slick),
         ``film_thickness`` [m] and ``land_binary_mask``.  Land cells are NaN in every
-        ocean field.  Coordinates ``y``, ``x`` [km].
+        ocean field.  Coordinates ``y``, ``x`` [km] and 2-D ``latitude``, ``longitude``
+        [degree] (local flat-earth conversion from :data:`ORIGIN`).
 
     Examples
     --------
@@ -174,10 +179,8 @@ def greyhaven_scene(size="full", *, wind_form="components"):
     inc_attrs = {"standard_name": "angle_of_incidence", "units": "degree",
                  "long_name": "radar incidence angle from the vertical"}
     coords = {
-        "y": ("y", y, {"long_name": "distance north of the scene origin", "units": "km",
-                       "axis": "Y"}),
-        "x": ("x", x, {"long_name": "distance east of the scene origin", "units": "km",
-                       "axis": "X"}),
+        "y": ("y", y, {"long_name": "distance north of the scene origin", "units": "km"}),
+        "x": ("x", x, {"long_name": "distance east of the scene origin", "units": "km"}),
     }
     data = {}
     if wind_form == "components":
@@ -217,6 +220,15 @@ def greyhaven_scene(size="full", *, wind_form="components"):
                              {"standard_name": "land_binary_mask", "units": "1",
                               "long_name": "land (1) or sea (0)"}),
     })
+    lat0, lon0 = ORIGIN
+    km_per_deg_lat = 111.2                                  # spherical earth, R = 6371 km
+    lat = lat0 + yy / km_per_deg_lat
+    lon = lon0 + xx / (km_per_deg_lat * np.cos(np.deg2rad(lat0)))
+    coords["latitude"] = (("y", "x"), lat, {"standard_name": "latitude",
+                                            "units": "degrees_north", "long_name": "latitude"})
+    coords["longitude"] = (("y", "x"), lon, {"standard_name": "longitude",
+                                             "units": "degrees_east",
+                                             "long_name": "longitude"})
     ds = xr.Dataset(data, coords=coords)
     ds.attrs = {
         "title": f"{SCENE_NAME}: invented coastal radar scene",
@@ -228,4 +240,6 @@ def greyhaven_scene(size="full", *, wind_form="components"):
                    "invented film patch.  The radar is west of the scene and looks east.",
         "Conventions": "CF-1.10",
     }
+    for name in ds.coords:
+        ds[name].encoding["_FillValue"] = None     # CF: no fill value on coordinates
     return ds

@@ -1063,7 +1063,8 @@ def extend_dataset(ds, *, overrides=None, units=None, direction_convention=None,
         output_core_dims=[core_out.get(key, []) for key in keys],
         dask="parallelized",
         output_dtypes=[dtypes.get(key, np.float64) for key in keys],
-        dask_gufunc_kwargs={"output_sizes": {"wavenumber": k.size}},
+        dask_gufunc_kwargs=({"output_sizes": {"wavenumber": k.size}} if keep_spectra
+                            else None),
         keep_attrs=False)
     out = xr.Dataset({_OUT_NAMES[key]: r for key, r in zip(keys, results)})
     # coordinates: the input's that live on the spectra's other dimensions
@@ -1071,10 +1072,9 @@ def extend_dataset(ds, *, overrides=None, units=None, direction_convention=None,
     coords = {c: ds.coords[c] for c in ds.coords
               if set(ds.coords[c].dims) <= batch and c not in (fdim, ddim)}
     out = out.assign_coords(coords)
-    out = out.assign_coords(
-        wavenumber=("wavenumber", k),
-        **{ddim: (ddim, th)})
-    out["wavenumber_bounds"] = (("wavenumber", "bounds"), kb)
+    if keep_spectra:
+        out = out.assign_coords(wavenumber=("wavenumber", k), **{ddim: (ddim, th)})
+        out["wavenumber_bounds"] = (("wavenumber", "bounds"), kb)
     out["wind_speed"] = speed.astype(float).broadcast_like(out["significant_wave_height"])
     out["wind_from_direction"] = wdir.astype(float).broadcast_like(
         out["significant_wave_height"])
@@ -1085,12 +1085,13 @@ def extend_dataset(ds, *, overrides=None, units=None, direction_convention=None,
     for name, attrs in TAIL_METADATA.items():
         if name in out.variables:
             out[name].attrs = dict(attrs)
-    out["wavenumber"].attrs["bounds"] = "wavenumber_bounds"
-    out[ddim].attrs = {
-        "standard_name": f"sea_surface_wave_{conv}_direction",
-        "long_name": ("direction the waves come from" if conv == "from" else
-                      "direction the waves travel to") + ", clockwise from north",
-        "units": "degree"}
+    if keep_spectra:
+        out["wavenumber"].attrs["bounds"] = "wavenumber_bounds"
+        out[ddim].attrs = {
+            "standard_name": f"sea_surface_wave_{conv}_direction",
+            "long_name": ("direction the waves come from" if conv == "from" else
+                          "direction the waves travel to") + ", clockwise from north",
+            "units": "degree"}
     for c in coords:
         out[c].attrs = dict(ds.coords[c].attrs)
         out[c].encoding = dict(ds.coords[c].encoding)

@@ -329,8 +329,10 @@ def test_presets_are_labelled_and_in_range():
 
 
 def test_frequency_below_valid_range_is_an_error():
-    with pytest.raises(ShortwaveInputError, match="outside the valid range"):
+    with pytest.raises(ShortwaveInputError, match="frequency_hz: 0.1 Hz is below the valid"):
         F.damping_ratio_at_frequency(0.1, F.Monolayer(0.02))
+    with pytest.raises(ShortwaveInputError, match="omega: .* is below the valid range"):
+        F.complex_wavenumber(0.5, F.Monolayer(0.02))
     with pytest.raises(ShortwaveInputError, match="valid range for film damping"):
         F.damping_ratio(0.2, F.Monolayer(0.02))
     with pytest.raises(ShortwaveInputError, match="valid range for film damping"):

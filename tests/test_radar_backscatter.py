@@ -187,3 +187,16 @@ def test_bad_input(kwargs, match):
     args.update(kwargs)
     with pytest.raises(ShortwaveInputError, match=match):
         nrcs(**args)
+
+
+@pytest.mark.parametrize("band", ["L", "X", "Ku", "Ka"])
+def test_other_bands_rise_with_wind_and_vv_above_hh(band):
+    from shortwave.radar import band as get_band
+    f = get_band(band).centre_hz
+    # from 7 m/s up: at L band the Elfouhaily spectrum near K_B ~ 34 rad/m falls between
+    # 2 and 6 m/s (its long-wave part leaves the Bragg range faster than the short-wave
+    # part grows), so sigma0 is not monotonic in light winds there
+    s_vv = nrcs(f, 40.0, np.array([7.0, 10.0, 16.0]), "VV", 0.0, water=SEA)
+    s_hh = nrcs(f, 40.0, np.array([7.0, 10.0, 16.0]), "HH", 0.0, water=SEA)
+    assert np.all(np.diff(s_vv) > 0) and np.all(s_vv > s_hh)
+    assert np.all((to_db(s_vv) > -35) & (to_db(s_vv) < 0))

@@ -123,3 +123,16 @@ def test_centrosymmetric_and_fold_keep_variance_and_slopes():
     c1, c2 = moments.slope_covariance(down, k, phi), moments.slope_covariance(F, k, phi)
     assert c1["mss_x"] == pytest.approx(c2["mss_x"], rel=1e-12)
     assert c1["mss_y"] == pytest.approx(c2["mss_y"], rel=1e-12)
+
+
+def test_model_cartesian_spectrum():
+    # Psi(kx, ky) = F(k, phi)/k; rotating the wind rotates the spectrum
+    kx, ky = np.meshgrid(np.linspace(-20, 20, 5), np.linspace(-20, 20, 5))
+    P = sp.cartesian(kx, ky, 10.0, wind_direction_deg=30.0)
+    k = np.hypot(kx, ky)
+    ref = np.where(k > 0, sp.directional(np.where(k > 0, k, 1.0),
+                                         np.rad2deg(np.arctan2(ky, kx)) - 30.0, 10.0)
+                   / np.where(k > 0, k, 1.0), 0.0)
+    np.testing.assert_allclose(P, ref, rtol=1e-13)
+    assert P[2, 2] == 0.0
+    np.testing.assert_allclose(P, P[::-1, ::-1], rtol=1e-13)   # centrosymmetric

@@ -8,7 +8,6 @@ prints sigma0 (linear and dB) from the composite model of :func:`shortwave.radar
 from __future__ import annotations
 
 import json
-import math
 import sys
 import warnings
 
@@ -50,9 +49,9 @@ def _polarization(text):
 def add_arguments(parser):
     from ..radar import MODELS
     from ..spectrum import MODELS as SPECTRA
-    parser.add_argument("--radar", "-r", type=radar_argument, default=radar_argument("C"),
+    parser.add_argument("--radar", "-r", type=radar_argument, default="C",
                         metavar="BAND|FREQ", help="radar band letter or frequency, e.g. C, "
-                        "X, Ku, 5.4GHz (default: C)")
+                        "X, Ku, 5.4GHz")
     parser.add_argument("--incidence", "-i", nargs="+", default=list(DEFAULT_INCIDENCE),
                         metavar="DEG", help="incidence angles [deg] in (0, 90), numbers or "
                         "START:STOP:STEP (STOP included)")
@@ -101,6 +100,14 @@ def backscatter_table(radar, incidences, winds, azimuths, polarizations, *, wate
 
     Each (polarisation) is one vectorised :func:`shortwave.radar.backscatter_components`
     call over all winds, azimuths and incidences.
+
+    Examples
+    --------
+    >>> from shortwave.water import Water
+    >>> t = backscatter_table(("C", 5.405e9), [40.0], [10.0], [0.0], ["VV", "HH"],
+    ...                       water=Water(15, 35))
+    >>> t["polarization"], bool(t["sigma0_db"][0] > t["sigma0_db"][1])
+    (['VV', 'HH'], True)
     """
     from ..radar import backscatter_components, to_db
     label, f = radar

@@ -58,7 +58,13 @@ def _float(kind, *, positive=False, allow_inf=False):
 
 
 def radar_argument(text):
-    """argparse type: a band letter or a frequency string, returned as (label, Hz)."""
+    """argparse type: a band letter or a frequency string, returned as (label, Hz).
+
+    Examples
+    --------
+    >>> radar_argument("ku"), radar_argument("13.5MHz")
+    (('Ku', 13575000000.0), ('13.5MHz', 13500000.0))
+    """
     from ..radar import band, parse_frequency
     try:
         f = parse_frequency(text)
@@ -82,7 +88,12 @@ def _frequency_label(f):
 def angle_values(values, *, low=0.0, high=90.0, closed_high=True, name="--incidence"):
     """Expand angle arguments: numbers, or ranges ``START:STOP:STEP`` (STOP included).
 
-    Returns a 1-D float array; raises ``ValueError`` with a one-line message.
+    Returns a 1-D float array [degree]; raises ``ValueError`` with a one-line message.
+
+    Examples
+    --------
+    >>> angle_values(["20:40:10", "55"]).tolist()
+    [20.0, 30.0, 40.0, 55.0]
     """
     out = []
     for text in values:
@@ -155,6 +166,13 @@ def bragg_table(radars, incidences, water, *, current=0.0, depth=math.inf):
     Returns
     -------
     dict of str to list (units in :data:`UNITS`)
+
+    Examples
+    --------
+    >>> from shortwave.water import Water
+    >>> t = bragg_table([("C", 5.405e9)], [30.0], Water(15, 35))
+    >>> round(t["bragg_wavelength"][0], 5), round(t["radar_wavelength"][0], 5)
+    (0.05547, 0.05547)
     """
     from ..radar import bragg_lines, bragg_wave, radar_wavelength
     cols = {name: [] for name in UNITS}
@@ -168,13 +186,13 @@ def bragg_table(radars, incidences, water, *, current=0.0, depth=math.inf):
         n = th.size
         cols["radar"] += [label] * n
         cols["frequency"] += [f] * n
-        cols["incidence"] += list(th)
+        cols["incidence"] += [float(v) for v in th]
         cols["radar_wavelength"] += [float(radar_wavelength(f))] * n
         for key, val in (("bragg_wavelength", w.wavelength), ("bragg_wavenumber", w.wavenumber),
                          ("bragg_frequency", w.frequency), ("period", w.period),
                          ("phase_speed", w.phase_speed), ("doppler_advancing", adv),
                          ("doppler_receding", rec)):
-            cols[key] += list(np.broadcast_to(val, th.shape).astype(float))
+            cols[key] += [float(v) for v in np.broadcast_to(val, th.shape)]
     return cols
 
 

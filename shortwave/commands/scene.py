@@ -233,16 +233,17 @@ def run(args):
             _plot(path, args.plot)
         return 0
     import xarray as xr
+    from ..plots.maps import units_label
     with xr.open_dataset(path) as out:
         rows = {"variable": [], "units": [], "min": [], "max": [], "NaN cells": []}
         for name, da in out.data_vars.items():
             vals = da.values
             finite = vals[~(vals != vals)]
             rows["variable"].append(name)
-            rows["units"].append(da.attrs.get("units", ""))
+            rows["units"].append(units_label(da.attrs.get("units", "")))
             rows["min"].append(float(finite.min()) if finite.size else float("nan"))
             rows["max"].append(float(finite.max()) if finite.size else float("nan"))
-            rows["NaN cells"].append(int(vals.size - finite.size))
+            rows["NaN cells"].append(str(int(vals.size - finite.size)))
     print(format_table(rows, digits=4,
                        title=f"{path}: {scan.cells} cells ({scan.missing} land/missing, "
                              f"{scan.calm} calm below {args.min_wind:g} m/s), "

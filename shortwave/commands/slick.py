@@ -141,9 +141,9 @@ def build_film(args):
         other = mono if isinstance(film, F.OilLayer) else oil
         if other:
             kind = "an oil layer" if isinstance(film, F.OilLayer) else "a monolayer"
-            raise ValueError(f"--film {args.film} is {kind}; options "
-                             f"{', '.join('--' + k.replace('_', '-') for k in other)} do "
-                             "not apply to it")
+            prefix = "--" if isinstance(film, F.OilLayer) else "--oil-"
+            names = ", ".join(prefix + k.replace("_", "-") for k in other)
+            raise ValueError(f"--film {args.film} is {kind}; {names} do not apply to it")
         return film.replace(**given) if given else film
     if mono:
         if "elasticity" not in mono:

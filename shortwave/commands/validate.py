@@ -6,8 +6,6 @@ writes the same table as CSV.  The exit status is 1 when any check fails, 0 othe
 """
 from __future__ import annotations
 
-import os
-
 from ..tables import FORMATS, format_table
 
 NAME = "validate"
@@ -32,30 +30,17 @@ def add_arguments(parser):
                         help="print only the rows that fail")
 
 
-def results_table(results):
-    """Return the validation results as ordered columns for :func:`format_table`."""
+def results_table(results, reasons=False):
+    """Return the validation results as ordered columns for :func:`format_table`.
+
+    With ``reasons`` a last column gives why each tolerance was chosen.
+    """
     rows = [r.row() for r in results]
-    return {c: [row[c] for row in rows] for c in COLUMNS}
-
-
-def write_text_atomic(text, path):
-    """Write ``text`` to ``path`` through a temporary file and a rename; return the path."""
-    import tempfile
-    path = os.fspath(path)
-    folder = os.path.dirname(os.path.abspath(path))
-    if not os.path.isdir(folder):
-        raise OSError(f"--csv: folder {folder} does not exist")
-    if not os.access(folder, os.W_OK):
-        raise OSError(f"--csv: folder {folder} is not writable")
-    fd, tmp = tempfile.mkstemp(prefix=".tmp-", suffix=".csv", dir=folder)
-    try:
-        with os.fdopen(fd, "w", encoding="utf-8", newline="") as fh:
-            fh.write(text)
-        os.replace(tmp, path)
-    finally:
-        if os.path.exists(tmp):
-            os.remove(tmp)
-    return path
+    cols = {c: [row[c] for row in rows] for c in COLUMNS}
+    if reasons:
+        cols["tolerance_reason"] = [r.check.tolerance_reason for r in results]
+        cols["error"] = [r.error for r in results]
+    return cols
 
 
 def run(args):
@@ -69,8 +54,13 @@ def run(args):
         checks = [c for c in checks if c.topic == args.topic]
     results = [evaluate(c) for c in checks]
     if args.csv:
-        write_text_atomic(format_table(results_table(results), fmt="csv", digits=7) + "\n",
-                           args.csv)
+        from ..demo import write_text_atomic
+        try:
+            write_text_atomic(format_table(results_table(results, reasons=True), fmt="csv",
+                                           digits=7) + "\n",
+                              args.csv)
+        except OSError as exc:
+            raise OSError(f"--csv: {exc}") from None
     shown = [r for r in results if not r.passed] if args.failed_only else results
     n_fail = sum(not r.passed for r in results)
     title = (f"{len(results)} comparisons with published references: "

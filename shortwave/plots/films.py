@@ -58,15 +58,15 @@ def damping_ratio_figure(k, ratio, path, *, bragg_marks=None, highlight=None, ti
             if not (np.isfinite(kb) and k.min() <= kb <= k.max()):
                 continue
             ax.axvline(kb, **style)
-            ax.text(kb, ymax * 1.02, f"{lab} ", rotation=90, va="top", ha="right",
-                    fontsize=8, color=style["color"])
+            ax.text(kb, 0.98, f"{lab} ", rotation=90, va="top", ha="right", fontsize=8,
+                    color=style["color"], transform=ax.get_xaxis_transform())
     ax.axhline(1.0, color="0.3", lw=0.8)
     ax.set_xscale("log")
     ax.set_xlabel("wavenumber k [rad/m]")
     ax.set_ylabel("damping ratio y = film / clean")
-    ax.set_ylim(0.0, ymax * 1.25)
+    ax.set_ylim(0.0, ymax * 1.45)
     ax.grid(True, which="both", alpha=0.25)
-    ax.legend(loc="upper left", fontsize=8)
+    ax.legend(loc="center left", fontsize=8)
     secx = ax.secondary_xaxis("top", functions=(lambda kk: 2 * np.pi / np.maximum(kk, 1e-9) * 100,
                                                  lambda lam: 2 * np.pi / np.maximum(lam, 1e-9) * 100))
     secx.set_xlabel("wavelength [cm]")

@@ -9,48 +9,7 @@ import numpy as np
 
 from . import new_figure, save_figure
 
-__all__ = ["speeds_figure", "field_map", "scene_panels"]
-
-
-def speeds_figure(water, path, wavelength_range=(1e-3, 1.0)):
-    """Phase and group speed against wavelength, marking the phase-speed minimum.
-
-    Parameters
-    ----------
-    water : shortwave.water.Water or Liquid
-        The liquid.
-    path : str
-        PNG file to write.
-    wavelength_range : (float, float)
-        Smallest and largest wavelength [m].
-
-    Returns
-    -------
-    str
-        The path written.
-    """
-    from .. import dispersion
-    lam = np.geomspace(*wavelength_range, 400)
-    k = 2 * np.pi / lam
-    c = np.asarray(dispersion.phase_speed(k, water))
-    cg = np.asarray(dispersion.group_speed(k, water))
-    cmin, kmin = dispersion.minimum_phase_speed(water)
-    fig, ax = new_figure(figsize=(6.4, 4.2))
-    ax.loglog(lam * 100, c, label="phase speed c")
-    ax.loglog(lam * 100, cg, "--", label="group speed c_g")
-    ax.plot([2 * np.pi / kmin * 100], [cmin], "o", color="k",
-            label=f"minimum c = {cmin * 100:.1f} cm/s at {2 * np.pi / kmin * 100:.2f} cm")
-    ax.set_xlabel("wavelength [cm]")
-    ax.set_ylabel("speed [m/s]")
-    t = getattr(water, "temperature_c", None)
-    s = getattr(water, "salinity", None)
-    title = "Capillary-gravity waves"
-    if t is not None and s is not None:
-        title += f", water at {float(t):g} degC, {float(s):g} g/kg"
-    ax.set_title(title)
-    ax.grid(True, which="both", alpha=0.3)
-    ax.legend(fontsize=8)
-    return save_figure(fig, path)
+__all__ = ["field_map", "scene_panels", "scene_overview", "units_label"]
 
 
 def _coords(da):
@@ -69,6 +28,12 @@ def _coords(da):
     return x, y, xl, yl
 
 
+def units_label(units):
+    """Units for people: the UDUNITS decibel ``0.1 lg(re 1)`` shows as ``dB``."""
+    u = str(units or "").strip()
+    return "dB" if u.replace(" ", "") in ("0.1lg(re1)", "lg(re1)/10") else u
+
+
 def _draw(ax, da, *, cmap="viridis", vmin=None, vmax=None, title=None, land=None):
     x, y, xl, yl = _coords(da)
     vals = np.ma.masked_invalid(np.asarray(da.values, dtype=float))
@@ -79,7 +44,7 @@ def _draw(ax, da, *, cmap="viridis", vmin=None, vmax=None, title=None, land=None
     ax.set_xlabel(xl)
     ax.set_ylabel(yl)
     ax.set_aspect("equal")
-    units = da.attrs.get("units", "")
+    units = units_label(da.attrs.get("units", ""))
     name = title or da.attrs.get("long_name", da.name)
     ax.set_title(name if len(name) < 60 else name[:57] + "...", fontsize=9)
     cb = ax.figure.colorbar(mesh, ax=ax, shrink=0.85)

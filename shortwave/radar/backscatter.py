@@ -316,7 +316,8 @@ def backscatter_components(frequency_hz, incidence_deg, wind_speed, polarization
             lnk = np.log(kk)
             lnb = _interp(tab.lnb, rows[:, None], fracs[:, None], lnk)
             dl = _interp(tab.delta, rows[:, None], fracs[:, None], lnk)
-            return (np.exp(lnb) / kk**4 / (2 * np.pi)
+            k2 = kk * kk
+            return (np.exp(lnb) / (k2 * k2) / (2 * np.pi)
                     * (1.0 + dl * np.cos(2.0 * (direction - angles[:, None]))))
         return f
 

@@ -37,14 +37,38 @@ POLARIZATIONS = ("VV", "HH", "HV", "VH")
 
 
 def check_polarization(polarization, allow_cross=True):
-    """Return the canonical polarisation key (``"VV"``, ``"HH"`` or ``"HV"``)."""
+    """Return the canonical polarisation key (``"VV"``, ``"HH"`` or ``"HV"``).
+
+    Parameters
+    ----------
+    polarization : str
+        ``"VV"``, ``"HH"``, ``"HV"`` or ``"VH"`` (case-insensitive; VH = HV).
+    allow_cross : bool
+        Accept the cross-polarisations.
+
+    Examples
+    --------
+    >>> check_polarization("vh"), check_polarization("hh")
+    ('HV', 'HH')
+    """
     choices = POLARIZATIONS if allow_cross else ("VV", "HH")
     key = check_choice("polarization", polarization, choices)
     return "HV" if key == "VH" else key
 
 
 def microwave_incidence(incidence_deg):
-    """Incidence in radians for the microwave formulas: valid (0, 90) degrees exclusive."""
+    """Incidence in radians for the microwave formulas: valid (0, 90) degrees exclusive.
+
+    Parameters
+    ----------
+    incidence_deg : numeric
+        Incidence angle [degree]; 0 and 90 are refused (the formulas diverge there).
+
+    Examples
+    --------
+    >>> round(float(microwave_incidence(30.0)), 6)
+    0.523599
+    """
     th = check_range("incidence_deg", incidence_deg, 0.0, 90.0, inclusive=(False, False),
                      unit="degree")
     return np.deg2rad(th)
@@ -64,11 +88,15 @@ def _eps(permittivity):
 
 def _g_coefficients(theta, eps):
     """g_HH, g_VV at incidence theta [rad] (arrays broadcast), principal sqrt."""
-    s2 = np.sin(theta) ** 2
-    c = np.cos(theta)
+    return _g_from_cos(np.cos(theta), np.sin(theta) ** 2, eps)
+
+
+def _g_from_cos(c, s2, eps):
+    """g_HH, g_VV from cos(theta) and sin^2(theta) (arrays broadcast)."""
     root = np.sqrt(eps - s2)  # principal branch, Re >= 0
-    g_hh = (eps - 1.0) / (c + root) ** 2  # Valenzuela (1978) Eq. (6), HH
-    g_vv = (eps - 1.0) * (eps * (1.0 + s2) - s2) / (eps * c + root) ** 2  # Eq. (7), VV
+    em1 = eps - 1.0
+    g_hh = em1 / (c + root) ** 2  # Valenzuela (1978) Eq. (6), HH
+    g_vv = em1 * (eps * (1.0 + s2) - s2) / (eps * c + root) ** 2  # Eq. (7), VV
     return g_hh, g_vv
 
 
@@ -213,6 +241,12 @@ def slope_quadrature(nodes, upper):
         Nodes in [-6, min(upper, 6)] and weights including the normal density.
     z2, w2 : ndarray, shape ``(n2,)``
         Gauss-Hermite nodes and weights of a standard normal variable (sum 1).
+
+    Examples
+    --------
+    >>> z1, w1, z2, w2 = slope_quadrature((12, 6), [0.0, 10.0])
+    >>> [round(float(v), 6) for v in w1.sum(axis=-1)], round(float(w2.sum()), 12)
+    ([0.5, 1.0], 1.0)
     """
     n1, n2 = _node_counts(nodes)
     x1, v1 = np.polynomial.legendre.leggauss(n1)
@@ -326,8 +360,7 @@ def tilted_bragg_nrcs(frequency_hz, incidence_deg, spectrum, slope_variance, per
     safe_sin_l = np.where(keep, sin_l, 1.0)
     alpha = sin_tp * cos_d / safe_sin_l
     beta = sin_d / safe_sin_l
-    theta_l = np.arctan2(safe_sin_l, cos_l)
-    g_hh, g_vv = _g_coefficients(theta_l, eps[e])
+    g_hh, g_vv = _g_from_cos(cos_l, safe_sin_l**2, eps[e])
     if pol == "VV":
         coef = alpha**2 * g_vv + beta**2 * g_hh
     elif pol == "HH":
@@ -337,6 +370,8 @@ def tilted_bragg_nrcs(frequency_hz, incidence_deg, spectrum, slope_variance, per
     k_l = 2.0 * k[e] * safe_sin_l                         # |K_l| = 2 k sin t_l
     direction = np.arctan2(cos_tp * sin_d, sin_tp)        # of K_l, from the look direction
     f = np.asarray(spectrum(k_l, direction), dtype=float)
-    patch = 16 * np.pi * k[e] ** 4 * cos_l**4 * np.abs(coef) ** 2 * f  # tilted-patch SPM
+    cos2 = cos_l * cos_l
+    power = coef.real**2 + coef.imag**2
+    patch = 16 * np.pi * k[e] ** 4 * (cos2 * cos2) * power * f  # tilted-patch SPM
     patch = np.where(keep, patch, 0.0)
     return scalar_or_array(np.sum(patch * w, axis=-1))

@@ -26,7 +26,7 @@ from .spreading import eckv_delta
 from . import energy_balance
 
 __all__ = ["MODELS", "COMPONENTS", "omnidirectional", "spreading", "directional",
-           "curvature", "directional_curvature", "mean_square_slope",
+           "curvature", "directional_curvature", "cartesian", "mean_square_slope",
            "mean_square_slope_components", "DEFAULT_K_MAX", "DEFAULT_K_MIN_FACTOR",
            "DEFAULT_POINTS"]
 
@@ -166,8 +166,10 @@ def spreading(k, wind_speed, model="elfouhaily1997", inverse_wave_age=OMEGA_FULL
     -------
     numeric
         Delta(k) [1]: F(k, phi) = S(k)/(2 pi) (1 + Delta cos 2 phi); for a model whose
-        spreading is not of that form, the second angular harmonic
-        Delta = 2 integral D(k, phi) cos 2 phi dphi of its centrosymmetric part.
+        spreading is not of that form (``"yurovskaya2013"``), the second angular harmonic
+        Delta = 2 integral D(k, phi) cos 2 phi dphi of its spreading D, which exceeds 1
+        where the spreading is narrower than (1 + cos 2 phi)/(2 pi) (capillary range).
+        Either way the along-wind slope fraction is 1/2 + Delta/4.
 
     Examples
     --------
@@ -245,6 +247,45 @@ def directional_curvature(k, phi_deg, wind_speed, model="elfouhaily1997",
             from None
     return scalar_or_array(np.broadcast_to(
         _DIRECTIONAL[model](f, phi, bool(centrosymmetric), **mkw), shape))
+
+
+def cartesian(kx, ky, wind_speed, wind_direction_deg=0.0, model="elfouhaily1997",
+              inverse_wave_age=OMEGA_FULL, fetch=None, water=None, centrosymmetric=True,
+              **kw):
+    """Cartesian wavenumber spectrum Psi(kx, ky) = F(k, phi)/k [m4] of a model.
+
+    Parameters
+    ----------
+    kx, ky : numeric
+        Wavenumber components [rad m-1] (broadcast together, e.g. from ``np.meshgrid``);
+        the point (0, 0) gets 0.
+    wind_speed : numeric
+        U10 [m s-1], > 0.
+    wind_direction_deg : numeric
+        Direction the wind blows towards, counter-clockwise from +kx [degree].
+    model, inverse_wave_age, fetch, water, centrosymmetric, **kw :
+        As in :func:`directional`.
+
+    Returns
+    -------
+    numeric
+        Psi [m4]; the double integral over the (kx, ky) plane is the elevation variance.
+
+    Examples
+    --------
+    >>> round(float(cartesian(1.0, 0.0, 10.0) / directional(1.0, 0.0, 10.0)), 12)
+    1.0
+    """
+    kx = as_float_array("kx", kx)
+    ky = as_float_array("ky", ky)
+    wd = angle_deg_array("wind_direction_deg", wind_direction_deg)
+    kk = np.hypot(kx, ky)
+    zero = kk == 0
+    k = np.where(zero, 1.0, kk)
+    phi = np.rad2deg(np.arctan2(ky, kx)) - wd
+    F = np.asarray(directional(k, phi, wind_speed, model, inverse_wave_age, fetch, water,
+                               centrosymmetric, **kw))
+    return scalar_or_array(np.where(zero, 0.0, F / k))
 
 
 def _log_grid(k_min, k_max, n):
