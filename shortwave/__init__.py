@@ -5,10 +5,16 @@ Bragg and two-scale radar scattering, visco-elastic film damping and slick contr
 scalars, NumPy arrays and gridded NetCDF fields.
 
 SI units inside; angles in degrees at the public interface; radar frequency in Hz.
+
+Topic modules: :mod:`shortwave.water`, :mod:`shortwave.permittivity`,
+:mod:`shortwave.dispersion`, :mod:`shortwave.spectrum`, :mod:`shortwave.radar`,
+:mod:`shortwave.films`, :mod:`shortwave.slick`; files and scenes in
+:mod:`shortwave.ncio`, :mod:`shortwave.tail` and :mod:`shortwave.fields`.
 """
 __version__ = "0.1.0"
 
 from .water import SEAWATER, Liquid, Water  # noqa: E402
-from . import dispersion  # noqa: E402
+from . import dispersion, permittivity, spectrum, radar, films, slick  # noqa: E402
 
-__all__ = ["__version__", "Water", "Liquid", "SEAWATER", "dispersion"]
+__all__ = ["__version__", "Water", "Liquid", "SEAWATER", "dispersion", "permittivity",
+           "spectrum", "radar", "films", "slick"]

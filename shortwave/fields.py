@@ -786,28 +786,31 @@ class _Kernel:
         mss_s = res["mean_square_slope"][idx].copy()
         cells = np.flatnonzero(on)
         if cells.size:
-            tk = thick[cells] if (thick is not None and isinstance(self.film, films.OilLayer)) \
-                else None
+            oil = isinstance(self.film, films.OilLayer) and thick is not None
+            tk = thick[cells] if oil else None
+            film_cells = self.film.replace(thickness=tk) if oil else self.film
+            w_cells = Water(tt[cells], ss[cells])
+            # per cell, exact: damping ratio at K_B and the Bragg-level contrast models
+            ratio[cells] = np.asarray(films.damping_ratio(kb[cells], film_cells, w_cells))
+            if self.contrast_model != "two-scale":
+                kk = np.asarray(slick.contrast(
+                    film_cells, bragg_wavenumber=kb[cells], wind_speed=uu[cells],
+                    model=self.contrast_model, water=w_cells, azimuth_deg=aa[cells]))
+                slick_sig[cells] = sig[cells] / kk
+            mss_model = "balance" if self.contrast_model == "balance" else \
+                "alpers_huhnerfuss1989"
+            # per film class (one film for a monolayer, thickness classes for oil): the
+            # quantities that integrate over the spectrum need a single film
             for film_c, sel, _h in _film_classes(self.film, tk, self.per_decade):
                 c = cells[sel] if tk is not None else cells
                 if c.size == 0:
                     continue
-                w_c = Water(tt[c], ss[c])
-                ratio[c] = np.asarray(films.damping_ratio(kb[c], film_c, w_c))
                 if self.contrast_model == "two-scale":
                     slick_sig[c] = radar.nrcs(
                         self.f, ii[c], uu[c], self.pol, aa[c], self.model,
                         spectrum_model=self.spectrum_model, water=self.water,
                         permittivity=eps[c],
                         spectrum_factor=_film_factor(film_c, self.water))
-                    mss_model = "alpers_huhnerfuss1989"
-                else:
-                    kk = np.asarray(slick.contrast(
-                        film_c, bragg_wavenumber=kb[c], wind_speed=uu[c],
-                        model=self.contrast_model, water=w_c, azimuth_deg=aa[c]))
-                    slick_sig[c] = sig[c] / kk
-                    mss_model = ("balance" if self.contrast_model == "balance"
-                                 else "alpers_huhnerfuss1989")
                 grid = _wind_lattice(uu[c], MSS_SLICK_WIND_STEP)
                 m = np.asarray(slick.damped_mean_square_slope(
                     grid, film_c, mss_model, self.water, n=_MSS_POINTS,

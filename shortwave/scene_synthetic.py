@@ -117,7 +117,9 @@ def _slick(x, y, land):
     r2 = (a / 6.0) ** 2 + (c / (1.1 + 0.12 * a)) ** 2
     edge = 1.0 + 0.15 * np.sin(3.0 * a) * np.cos(2.0 * c)
     inside = (r2 < edge) & ~land
-    thickness = np.where(inside, 2.0e-6 * np.exp(-1.5 * r2) + 0.1e-6, 0.0)  # [m]
+    # thin sheen (0.3 um) at the edge, a thick core (about 200 um) near the source
+    thickness = np.where(inside, 0.3e-6 * (200e-6 / 0.3e-6) ** (np.exp(-2.5 * r2)
+                                                               * (a < 1.5)), 0.0)  # [m]
     return inside, thickness
 
 

@@ -67,10 +67,12 @@ def test_moments_agree_across_representations():
     kw = dict(method="trapezoid")
     hs = moments.significant_wave_height(S, k, **kw)
     assert moments.significant_wave_height(F, k, phi, **kw) == pytest.approx(hs, rel=1e-10)
-    assert moments.significant_wave_height(B, k, curvature=True, **kw) == pytest.approx(hs, rel=1e-12)
+    assert moments.significant_wave_height(B, k, curvature=True, **kw) == \
+        pytest.approx(hs, rel=1e-12)
     mss = moments.mean_square_slope_from(S, k, **kw)
     assert mss == pytest.approx(sp.mean_square_slope(U, k_max=7400.0), rel=1e-5)
-    assert moments.mean_square_slope_from(B, k, curvature=True, **kw) == pytest.approx(mss, rel=1e-12)
+    assert moments.mean_square_slope_from(B, k, curvature=True, **kw) == \
+        pytest.approx(mss, rel=1e-12)
     up = moments.mean_square_slope_from(F, k, phi, component="upwind", **kw)
     assert up == pytest.approx(sp.mean_square_slope(U, k_max=7400.0, component="upwind"),
                                rel=1e-5)
@@ -80,7 +82,8 @@ def test_moments_agree_across_representations():
     assert cr == pytest.approx(mss - up, rel=1e-10)
     # frequency form (deep water, the ECKV dispersion is not the project's: compare Hs only)
     E, f = convert.wavenumber_to_frequency(F, k, phi)
-    assert moments.frequency_significant_wave_height(E, f, phi, **kw) == pytest.approx(hs, rel=1e-5)
+    assert moments.frequency_significant_wave_height(E, f, phi, **kw) == \
+        pytest.approx(hs, rel=1e-5)
 
 
 def test_batch_axes():
@@ -109,7 +112,8 @@ def test_cos2_spreading_three_to_one():
     up = moments.mean_square_slope_from(F, k, phi, component="upwind")
     cr = moments.mean_square_slope_from(F, k, phi, component="crosswind")
     assert up / cr == pytest.approx(3.0, rel=1e-10)
-    assert moments.slope_covariance(F, k, phi)["major_direction_deg"] == pytest.approx(0.0, abs=1e-9)
+    axis = moments.slope_covariance(F, k, phi)["major_direction_deg"]
+    assert axis == pytest.approx(0.0, abs=1e-9)
 
 
 def test_frequency_mean_square_slope_components():

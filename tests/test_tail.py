@@ -12,7 +12,6 @@ from shortwave.tail import (K_MAX, extend_spectra, frequency_edges, transition_w
 
 F36 = geometric_frequencies()                    # 0.035-0.6 Hz, 36 frequencies
 TH36 = np.arange(5.0, 360.0, 10.0)               # offset direction axis
-G = 9.81
 
 
 def _variance(F, bounds, th):
@@ -21,11 +20,9 @@ def _variance(F, bounds, th):
 
 
 def _u125(u10):
-    """U10 -> U12.5, neutral log profile with Charnock z0 = 0.011 u*^2/g and C_D = 1.44e-3
-    (common practice; the reference note spectra.md Sect. 2 gives 1.017-1.022)."""
-    ust = np.sqrt(1.44e-3) * u10
-    z0 = 0.011 * ust**2 / G
-    return u10 * np.log(12.5 / z0) / np.log(10.0 / z0)
+    """U10 -> U12.5 by the neutral log profile (Charnock z0; common practice)."""
+    from shortwave.spectrum import wind_speed_at_height
+    return float(wind_speed_at_height(u10, 12.5))
 
 
 # --- variance of the resolved part through the conversion --------------------------------

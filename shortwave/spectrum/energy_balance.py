@@ -57,7 +57,6 @@ from __future__ import annotations
 
 import numpy as np
 
-from .._checks import ShortwaveInputError
 from ..water import as_liquid
 from .models import eckv_parts
 from .spreading import eckv_delta
@@ -370,14 +369,6 @@ def yurovskaya2013_directional_curvature(f, phi_rad, centrosymmetric=True):
     return b
 
 
-def check_water(water):
-    """The model needs viscosity and surface tension: a Liquid or None (sea water)."""
-    w = as_liquid(water)
-    if not hasattr(w, "kinematic_viscosity"):
-        raise ShortwaveInputError("water: the energy-balance model needs a kinematic viscosity")
-    return w
-
-
 def yurovskaya2013(k, wind_speed, inverse_wave_age=0.84, fetch=None, water=None, *,
                    friction_velocity=None, ustar_law="constant-drag", nan_policy="raise"):
     """Omnidirectional spectrum of the energy-balance short-wave model (Yurovskaya et al. 2013).
@@ -420,9 +411,9 @@ def yurovskaya2013(k, wind_speed, inverse_wave_age=0.84, fetch=None, water=None,
     (C20-C22); B_pc from the n = 1 balance fed by the dissipation of breaking waves at
     k_gamma^2/k, filtered by f(k/1.5k_gamma) - f(k/4k_gamma) (C11, C19, C23).
     Solved on an internal grid (50 points per decade from k_p/8 to 3e4 rad m-1, 73
-    directions on a half circle, 2.5 degree steps; omnidirectional integrals accurate to
-    about 0.5 %, limited by the steep onset of wind input near the cross-wind direction) by fixed-point iteration of the breaking source and
-    Newton's method for the local balance, then evaluated at ``k``.
+    directions on a half circle) by fixed-point iteration of the breaking source and
+    Newton's method for the local balance, then evaluated at ``k``; omnidirectional
+    values accurate to about 0.5 % (see the module docstring, Numerics).
 
     Examples
     --------
