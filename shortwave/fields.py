@@ -673,17 +673,47 @@ def _wind_lattice(u, step):
 
 
 def _film_factor(film, water):
-    """Spectrum factor 1 / y(k) of a film for :func:`shortwave.radar.nrcs` (memoised)."""
-    from . import slick
+    """Spectrum factor 1 / y(k) of a film for :func:`shortwave.radar.nrcs` (memoised).
+
+    Where the film overdamps the wave (no propagating root of the film dispersion
+    relation: thick viscous oil, very short waves) the factor is 0: the film suppresses
+    those waves entirely.
+    """
     memo = {}
 
     def factor(k):
         key = (k.shape, float(k.flat[0]), float(k.flat[-1]))
         if key not in memo:
-            memo[key] = 1.0 / np.asarray(slick.spectral_contrast(
-                k, 1.0, film, "alpers_huhnerfuss1989", water))   # A&H89 at every k
+            memo[key] = _inverse_contrast(k, 1.0, film, "alpers_huhnerfuss1989", water)
         return memo[key]
     return factor
+
+
+def _inverse_contrast(k, wind_speed, film, model, water):
+    """1 / K(k) of :func:`shortwave.slick.spectral_contrast`, 0 where the wave is overdamped."""
+    from . import slick
+    kk = np.asarray(slick.spectral_contrast(k, wind_speed, film, model, water,
+                                            on_failure="nan"))   # A&H89 / balance at each k
+    with np.errstate(divide="ignore", invalid="ignore"):
+        return np.where(np.isfinite(kk) & (kk > 0), 1.0 / kk, 0.0)
+
+
+def _damped_mss(winds, film, model, water, spectrum_model, n=None):
+    """Mean square slope of the film-damped spectrum at the winds ``winds`` [1].
+
+    The integral of B(k) / K(k) over ln k from k_p/50 to 1e4 rad m-1, the limits of
+    :func:`shortwave.spectrum.mean_square_slope`; overdamped waves contribute nothing.
+    """
+    from .spectrum import DEFAULT_K_MIN_FACTOR, curvature, peak_wavenumber
+    n = n or _MSS_POINTS
+    u = np.asarray(winds, dtype=float)
+    kmin = DEFAULT_K_MIN_FACTOR * np.asarray(peak_wavenumber(u, 0.84))
+    t = np.linspace(0.0, 1.0, n)
+    lnk = np.log(kmin)[:, None] + (np.log(1.0e4) - np.log(kmin))[:, None] * t
+    kg = np.exp(lnk)
+    b = np.asarray(curvature(kg, u[:, None], model=spectrum_model))
+    fac = _inverse_contrast(kg, u[:, None], film, model, water)
+    return np.trapezoid(b * fac, lnk, axis=-1)
 
 
 def _film_classes(film, thickness, per_decade):
@@ -791,11 +821,13 @@ class _Kernel:
             film_cells = self.film.replace(thickness=tk) if oil else self.film
             w_cells = Water(tt[cells], ss[cells])
             # per cell, exact: damping ratio at K_B and the Bragg-level contrast models
-            ratio[cells] = np.asarray(films.damping_ratio(kb[cells], film_cells, w_cells))
+            ratio[cells] = np.asarray(films.damping_ratio(kb[cells], film_cells, w_cells,
+                                                          on_failure="nan"))
             if self.contrast_model != "two-scale":
                 kk = np.asarray(slick.contrast(
                     film_cells, bragg_wavenumber=kb[cells], wind_speed=uu[cells],
-                    model=self.contrast_model, water=w_cells, azimuth_deg=aa[cells]))
+                    model=self.contrast_model, water=w_cells, azimuth_deg=aa[cells],
+                    on_failure="nan"))
                 slick_sig[cells] = sig[cells] / kk
             mss_model = "balance" if self.contrast_model == "balance" else \
                 "alpers_huhnerfuss1989"
@@ -812,9 +844,7 @@ class _Kernel:
                         permittivity=eps[c],
                         spectrum_factor=_film_factor(film_c, self.water))
                 grid = _wind_lattice(uu[c], MSS_SLICK_WIND_STEP)
-                m = np.asarray(slick.damped_mean_square_slope(
-                    grid, film_c, mss_model, self.water, n=_MSS_POINTS,
-                    spectrum_model=self.spectrum_model))
+                m = _damped_mss(grid, film_c, mss_model, self.water, self.spectrum_model)
                 mss_s[c] = np.interp(uu[c], grid, m)
         res["sigma0_slick"][idx] = slick_sig
         res["damping_ratio"][idx] = np.where(on, ratio, np.nan)

@@ -53,6 +53,11 @@ OUTPUT_METADATA = {
         "standard_name": "sea_surface_wave_directional_variance_spectral_density",
         "long_name": "frequency-direction spectrum of surface elevation E(f, theta)",
         "units": "m2 s rad-1"},
+    "spreading_ratio": {"long_name": "directional spreading ratio Delta(k) of the "
+                                     "centrosymmetric spectrum", "units": "1"},
+    "inverse_wave_age": {"long_name": "inverse wave age U10 / c_p", "units": "1"},
+    "friction_velocity": {"long_name": "friction velocity in air", "units": "m s-1"},
+    "peak_wavenumber": {"long_name": "wavenumber at the spectral peak", "units": "rad m-1"},
     # --- moments -----------------------------------------------------------------------
     "significant_wave_height": {"standard_name": "sea_surface_wave_significant_height",
                                 "long_name": "significant wave height 4 sqrt(m0)",
@@ -61,7 +66,10 @@ OUTPUT_METADATA = {
                           "long_name": "mean square slope (total)", "units": "1"},
     "mean_square_slope_upwind": {"standard_name": "sea_surface_mean_square_upwave_slope",
                                  "long_name": "mean square slope along the wind",
-                                 "units": "1"},
+                                 "units": "1",
+                                 "comment": "axis taken along the wind direction (the CF "
+                                            "name refers to the up-wave axis; for wind "
+                                            "seas the two coincide)"},
     "mean_square_slope_crosswind": {
         "standard_name": "sea_surface_mean_square_crosswave_slope",
         "long_name": "mean square slope across the wind", "units": "1"},
