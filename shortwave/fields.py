@@ -691,9 +691,12 @@ def _film_factor(film, water):
 
 def _inverse_contrast(k, wind_speed, film, model, water):
     """1 / K(k) of :func:`shortwave.slick.spectral_contrast`, 0 where the wave is overdamped."""
+    import warnings
     from . import slick
-    kk = np.asarray(slick.spectral_contrast(k, wind_speed, film, model, water,
-                                            on_failure="nan"))   # A&H89 / balance at each k
+    with warnings.catch_warnings():   # overdamped short waves are expected: factor 0 there
+        warnings.filterwarnings("ignore", message="film damping", category=RuntimeWarning)
+        kk = np.asarray(slick.spectral_contrast(k, wind_speed, film, model, water,
+                                                on_failure="nan"))  # A&H89 / balance at k
     with np.errstate(divide="ignore", invalid="ignore"):
         return np.where(np.isfinite(kk) & (kk > 0), 1.0 / kk, 0.0)
 
