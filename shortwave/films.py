@@ -234,9 +234,10 @@ class OilLayer:
         return dataclasses.replace(self, **changes)
 
 
-_MONO_SRC = ("E0 and omega_D: typical of the class, inside the ranges recalled (not "
-             "verified) from Alpers & Huehnerfuss (1989, JGR 94(C5) 6251, Table 1) and Gade "
-             "et al. (1998, JGR 103(C2) 3167)")
+_MONO_SRC = ("E0 and omega_D: typical of the class, from memory (literature range): inside "
+             "the ranges recalled, not verified, from Alpers & Huehnerfuss (1989, JGR 94(C5) "
+             "6251, Table 1) and Gade et al. (1998, JGR 103(C2) 3167), whose tables could "
+             "not be read")
 
 PRESETS = {
     "oleyl-alcohol": Monolayer(
@@ -268,8 +269,9 @@ PRESETS = {
         name="mineral-oil",
         source=("light mineral oil carrying surface-active impurities, as an effective "
                 "elastic film: dilational modulus of order 0.01 N/m with the damping maximum "
-                "near 8 Hz (Alpers & Huehnerfuss 1988, JGR 93(C4) 3642, abstract), typical "
-                "value; film pressure not given by the source, set to 0"),
+                "near 8 Hz (Alpers & Huehnerfuss 1988, JGR 93(C4) 3642, abstract read; the "
+                "preset reproduces the maximum at 8.4-9.5 Hz in 20-10 degC sea water), "
+                "typical value; film pressure not given by the source, set to 0"),
         ranges={"elasticity": (0.005, 0.020)}),
     # Oil layers: suggested defaults inside the verified property ranges (films.md Sec. 8.5),
     # not measurements; thickness 10 micrometres (a continuous thin film) unless changed.

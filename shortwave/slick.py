@@ -20,8 +20,11 @@ models (``model=``, keys in :data:`MODELS`):
     for beta_s <= 2 Gamma_film, the balance alone would predict total suppression
     (K -> infinity); there the short waves inside the slick are no longer wind-sustained and
     are supplied by non-local sources (transfer from longer waves, advection into the
-    slick) that the A&H89 equilibrium treats as unchanged by the film.  For n = 1, r = 1
-    the bound is reached continuously, at beta = 2 (1 + y) Gamma_clean.
+    slick) that the A&H89 equilibrium treats as unchanged by the film.  That equilibrium
+    (damping balanced by a supply independent of the spectrum) gives y whatever the
+    saturation exponent n, so the bound is y r^(-2/n), not y^(1/n).  The bound is reached
+    continuously: for n = 1, r = 1 at beta = 2 (1 + y) Gamma_clean; in general where
+    (beta - 2 Gamma_clean) / (r^2 beta - 2 Gamma_film) = y^n r^(-2).
 ``"two-scale"``
     The clean and film-covered sea through the composite NRCS model of
     :func:`shortwave.radar.nrcs`, with the whole spectrum divided by y(k) (A&H89 at every
@@ -42,7 +45,8 @@ References
 .. [1] Alpers, W. and Huehnerfuss, H. (1989). The damping of ocean waves by surface films:
    a new look at an old problem. J. Geophys. Res. 94(C5), 6251-6265.
 .. [2] Plant, W. J. (1982). A relationship between wind stress and wave slope. J. Geophys.
-   Res. 87(C3), 1961-1967 (beta = (0.04 +- 0.02) (u*/c)^2 omega cos phi; from memory).
+   Res. 87(C3), 1961-1967 (beta = (0.04 +- 0.02) (u*/c)^2 omega cos phi, the growth rate
+   of wave energy and momentum from the wind: checked against the abstract).
 .. [3] Wu, J. (1982). Wind-stress coefficients over sea surface from breeze to hurricane.
    J. Geophys. Res. 87(C12), 9704-9706.
 .. [4] Kudryavtsev, V., Hauser, D., Caudal, G. and Chapron, B. (2003). A semiempirical
@@ -75,8 +79,9 @@ SPECTRUM_MODELS = ("balance", "alpers_huhnerfuss1989")
 """Models of the film-damped spectrum (:func:`spectral_contrast`)."""
 
 PLANT_COEFFICIENT = 0.04
-"""Plant (1982): beta = 0.04 (u*/c)^2 omega cos(phi), energy growth rate (from memory;
-quoted uncertainty +-0.02)."""
+"""Plant (1982): beta = 0.04 (u*/c)^2 omega cos(phi), the growth rate of wave energy (and
+momentum) from the wind, uncertainty +-0.02 (both as stated in the paper's abstract).
+beta is an energy rate: it is compared with 2 Gamma, twice the amplitude damping rate."""
 
 CAUTION = ("Screening estimate, not proof of oil: low-wind areas, natural (biogenic) films "
            "and other ocean features look alike in radar images. Decisions rest with "
@@ -157,7 +162,8 @@ def wind_growth_rate(k, wind_speed, azimuth_deg=0.0, water=None, ustar_law="wu19
     -------
     numeric
         beta = 0.04 (r u*/c)^2 omega |cos(azimuth)| [s-1] (energy rate; compare with
-        2 Gamma).  Plant (1982) [2]_ quotes 0.04 +- 0.02 for roughly 0.1 < u*/c < 3.
+        2 Gamma).  Plant (1982) [2]_ gives 0.04 +- 0.02 "over a wide range of
+        frequencies" (abstract); the range roughly 0.1 < u*/c < 3 is from memory.
 
     Examples
     --------
@@ -226,14 +232,18 @@ def _balance(g_c, g_f, beta, friction_ratio, exponent):
     r2 = np.asarray(friction_ratio, float) ** 2
     n = np.asarray(exponent, float)
     y = g_f / g_c
-    bound = y / r2                                   # A&H89 y times the wind-input reduction
+    # The bound is the A&H89 ratio y itself (non-local supply balancing viscous damping
+    # does not involve the saturation exponent n), times the wind-input reduction
+    # r^(-2/n) (the strong-wind limit of the balance); it is not y^(1/n).
+    bound = y * r2 ** (-1.0 / n)
     num = beta - 2.0 * g_c                           # films.md Sec. 4.3, Eq. (2)
     den = r2 * beta - 2.0 * g_f
     ok = (num > 0) & (den > 0)
     with np.errstate(divide="ignore", invalid="ignore"):
         ratio = np.where(ok, num / np.where(ok, den, 1.0), np.inf)
-    capped = ratio >= bound
-    k_lin = np.minimum(ratio, bound) ** (1.0 / n)
+    k_bal = ratio ** (1.0 / n)                       # K = [(...)/(...)]^(1/n), Eq. (2)
+    capped = k_bal >= bound
+    k_lin = np.minimum(k_bal, bound)
     nan = np.isnan(beta) | np.isnan(g_f) | np.isnan(g_c)
     return np.where(nan, np.nan, k_lin), np.where(nan, False, capped)
 
@@ -276,7 +286,8 @@ def balance_contrast(bragg_wavenumber, wind_speed, film, water=None, *, azimuth_
     (films.md Sec. 4.3, Eq. 2, with the bound of the module docstring); beta from
     :func:`wind_growth_rate` (Plant 1982), Gamma from the exact film relation.  Where
     beta <= 2 Gamma_c (waves not wind-sustained even outside the slick) or
-    r^2 beta <= 2 Gamma_f, the bound applies.
+    r^2 beta <= 2 Gamma_f, the bound applies.  The bound is the A&H89 ratio y (times
+    r^(-2/n)) for every n: with ``exponent=3`` and weak wind the contrast is y, not y^(1/3).
 
     Examples
     --------

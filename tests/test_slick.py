@@ -82,6 +82,42 @@ def test_balance_bound_matches_analytic_crossing():
     assert np.array_equal(bound, beta <= 2 * (1 + y) * g_c)
 
 
+@pytest.mark.parametrize("n", [2.0, 3.0])
+@pytest.mark.parametrize("r", [1.0, 0.8])
+def test_balance_bound_is_the_ah89_ratio_for_any_exponent(n, r):
+    # Where wind input no longer sustains the waves in the slick, the bound is the
+    # A&H89 equilibrium (damping balanced by a supply independent of the spectrum): the
+    # ratio y itself, whatever the saturation exponent n (Alpers & Huehnerfuss 1989;
+    # films.md Sec. 4.2-4.3), times the wind-input reduction r^(-2/n).  A bound of
+    # y^(1/n) (2.17 instead of 10.19 at X band for n = 3) contradicts the documented model.
+    from shortwave.slick import wind_growth_rate
+    kb, film = 202.25, F.Monolayer(0.025, 1.0)
+    y = F.damping_ratio(kb, film, SEA20)
+    k_lin, bound = S.balance_contrast(kb, 2.0, film, SEA20, exponent=n, friction_ratio=r,
+                                      return_bound=True)
+    assert bound and k_lin == pytest.approx(y * r ** (-2.0 / n), rel=1e-12)
+    # away from the bound: films.md Sec. 4.3 Eq. (2) with the energy rates beta and 2 Gamma
+    u = 12.0
+    g_c, g_f = F.damping_rate(kb, None, SEA20), F.damping_rate(kb, film, SEA20)
+    beta = wind_growth_rate(kb, u, water=SEA20)
+    k_lin, bound = S.balance_contrast(kb, u, film, SEA20, exponent=n, friction_ratio=r,
+                                      return_bound=True)
+    assert not bound
+    assert k_lin == pytest.approx(((beta - 2 * g_c) / (r * r * beta - 2 * g_f)) ** (1 / n),
+                                  rel=1e-12)
+
+
+def test_balance_bound_is_continuous_for_exponent_three():
+    # the bound is reached continuously also for n = 3 (steeply: fine wind grid)
+    u = np.linspace(6.5, 6.7, 2001)
+    c = 10 * np.log10(np.asarray(S.balance_contrast(202.25, u, F.Monolayer(0.025, 1.0),
+                                                    SEA20, exponent=3.0)))
+    assert np.all(np.diff(c) <= 1e-12)
+    assert np.max(np.abs(np.diff(c))) < 0.15
+    assert c[0] == pytest.approx(10 * np.log10(F.damping_ratio(202.25, F.Monolayer(0.025, 1.0),
+                                                               SEA20)), abs=1e-9)
+
+
 def test_wind_input_reduction_and_exponent():
     k1 = S.balance_contrast(113.0, 12.0, "natural", SEA15)
     k08 = S.balance_contrast(113.0, 12.0, "natural", SEA15, friction_ratio=0.8)
@@ -139,6 +175,18 @@ def test_oleyl_alcohol_ku_band_contrast_in_published_window(incidence):
         c = np.asarray(S.contrast_db("oleyl-alcohol", 13.9e9, incidence, [3.5, 4.4],
                                      model=model, water=SEA15))
         assert np.all((c > 3.8) & (c < 10.8))
+
+
+def test_crude_oil_ku_band_contrast_below_published_maximum():
+    # W. Croswell and co-workers, NASA Langley 1979 crude-oil films (films.md Sec. 8.4 row 3,
+    # abstract only): Ku band 13.9 GHz, HH, depression up to 14 dB, largest near 30 deg and
+    # where the oil was thickest.  An upper plausibility bound for the oil-layer presets.
+    h = np.array([1e-6, 1e-5, 1e-4, 1e-3])
+    for name in ("light-crude", "medium-crude", "heavy-crude"):
+        film = F.film_preset(name, thickness=h)
+        c = np.asarray(S.contrast_db(film, 13.9e9, 30.0, model="alpers_huhnerfuss1989",
+                                     water=SEA15))
+        assert np.all(c <= 14.0) and np.all(np.diff(c) > 0), name   # thicker: darker
 
 
 # --- film-damped spectrum and Cox & Munk ------------------------------------------------
