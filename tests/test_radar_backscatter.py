@@ -200,3 +200,53 @@ def test_other_bands_rise_with_wind_and_vv_above_hh(band):
     s_hh = nrcs(f, 40.0, np.array([7.0, 10.0, 16.0]), "HH", 0.0, water=SEA)
     assert np.all(np.diff(s_vv) > 0) and np.all(s_vv > s_hh)
     assert np.all((to_db(s_vv) > -35) & (to_db(s_vv) < 0))
+
+
+def test_breaking_fraction_counts_the_folded_propagating_spectrum():
+    # Independent re-computation of q = c_q int_{k < k_r/10} int beta B_prop w dphi dln k
+    # (Kudryavtsev et al. 2003 form, constants from memory): the centrosymmetric
+    # Elfouhaily spectrum B(k, phi) is folded into its propagating form with
+    # shortwave.spectrum.convert.fold_downwind (spectra research note Sec. 4.3), and the
+    # wind input C_beta (u*/c)^2 cos|cos| and breaker weight 1 + a cos(phi - az) are
+    # integrated by brute force on a (k, phi) grid.  Using the symmetric spectrum over
+    # |phi| < 90 deg instead (the former implementation) gives half this value.
+    from shortwave import dispersion, spectrum
+    from shortwave.radar import breaking as brk
+    from shortwave.radar import radar_wavenumber
+    u10, az = 10.0, 30.0
+    k = np.geomspace(1e-3, brk.BREAKER_CUTOFF_RATIO * radar_wavenumber(C), 3000)
+    phi_deg = np.arange(-180.0, 180.0, 1.0)
+    b_sym = spectrum.directional_curvature(k[:, None], phi_deg[None, :], u10)
+    b_prop = spectrum.convert.fold_downwind(b_sym, phi_deg, 0.0)
+    phi = np.deg2rad(phi_deg)
+    ustar = spectrum.friction_velocity(u10)
+    c = dispersion.phase_speed(k, SEA)
+    beta = brk.WIND_INPUT_CONSTANT * (ustar / c)[:, None] ** 2 * np.cos(phi) * np.abs(np.cos(phi))
+    weight = 1.0 + np.cos(phi - np.deg2rad(az))
+    inner = np.sum(beta * b_prop * weight, axis=1) * np.deg2rad(1.0)
+    q_ref = brk.BREAKING_FRACTION_CONSTANT * np.trapezoid(inner, np.log(k))
+    q = breaking_fraction(C, u10, az, water=SEA)
+    assert q == pytest.approx(q_ref, rel=0.01)   # 64 points per decade in the model table
+
+
+def test_energy_balance_spectrum_gives_positive_bragg_level_at_all_azimuths():
+    # The energy-balance spectrum is narrower than (1 + cos 2 phi): its second harmonic
+    # Delta exceeds 1 near the Bragg wavenumbers of Ku and Ka band, so the truncated form
+    # B (1 + Delta cos 2 phi) / (2 pi) (formerly used) was negative crosswind and gave
+    # sigma0 < 0.  Independent check: flat-surface SPM (Wright 1968, 16 pi k^4 cos^4 |g|^2
+    # F) of the model's own folded directional spectrum from shortwave.spectrum.
+    from shortwave.permittivity import permittivity
+    from shortwave.radar import bragg_wavenumber
+    from shortwave.spectrum import directional, spreading
+    f = 13.575e9
+    kb = bragg_wavenumber(f, 40.0)
+    assert spreading(kb, 10.0, model="yurovskaya2013") > 1.0     # the trap is present
+    eps = permittivity(f, 20.0, 35.0)
+    for az in (0.0, 60.0, 90.0):
+        ref = spm_nrcs(f, 40.0, directional(kb, az, 10.0, model="yurovskaya2013") / kb, eps)
+        got = nrcs(f, 40.0, 10.0, "VV", az, model="bragg", water=SEA,
+                   spectrum_model="yurovskaya2013")
+        assert got == pytest.approx(ref, rel=3e-3)   # table interpolation in k and angle
+    two = nrcs(f, 40.0, 10.0, "VV", np.array([0.0, 90.0]), water=SEA,
+               spectrum_model="yurovskaya2013")
+    assert np.all(two > 0)

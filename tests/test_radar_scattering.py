@@ -205,15 +205,87 @@ def test_breaker_nrcs_form():
 
 
 def test_wind_input_direction_integrals():
-    # numerical integration of cos^2 phi (1 + Delta cos 2 phi) / (2 pi) (1 + a cos phi)
-    # over |phi| < 90 deg, against the closed forms I0 + a I1
-    phi = np.linspace(-np.pi / 2, np.pi / 2, 200001)
+    # The centrosymmetric spectrum (1 + Delta cos 2 phi) / (2 pi) is first folded into its
+    # propagating form (spectra research note Sec. 4.3; shortwave.spectrum.convert.
+    # fold_downwind: 2 F within 90 deg of down-wind, 0 behind), then the wind input
+    # cos(phi)|cos(phi)| and the orientation weight (1 + a cos phi) are integrated over the
+    # full circle numerically: independent re-computation of the closed forms I0 + a I1.
+    # Integrating the unfolded symmetric spectrum over |phi| < 90 deg (the former
+    # closed forms 1/4 + Delta/8, ...) counts only half of the waves.
+    from shortwave.spectrum.convert import fold_downwind
+    phi_deg = np.linspace(-180.0, 180.0, 720001)[:-1]
+    phi = np.deg2rad(phi_deg)
+    dphi = phi[1] - phi[0]
     for delta in (0.0, 0.3, 0.9):
-        integrand = np.cos(phi) ** 2 * (1 + delta * np.cos(2 * phi)) / (2 * np.pi)
-        i0 = np.trapezoid(integrand, phi)
-        i1 = np.trapezoid(integrand * np.cos(phi), phi)
+        sym = (1 + delta * np.cos(2 * phi)) / (2 * np.pi)
+        prop = fold_downwind(sym, phi_deg, 0.0)
+        assert np.sum(prop) * dphi == pytest.approx(1.0, rel=1e-9)   # variance kept
+        wind_input = np.cos(phi) * np.abs(np.cos(phi))
+        i0 = np.sum(wind_input * prop) * dphi
+        i1 = np.sum(wind_input * prop * np.cos(phi)) * dphi
         a, b = wind_input_directional_factors(delta)
-        assert a == pytest.approx(i0, rel=1e-9) and b == pytest.approx(i1, rel=1e-9)
+        assert a == pytest.approx(i0, rel=1e-6) and b == pytest.approx(i1, rel=1e-6)
+        # the unfolded symmetric spectrum over the full circle gives no net wind input
+        assert abs(np.sum(wind_input * sym) * dphi) < 1e-12
+
+
+# --- exact-geometry re-computation of the tilted-facet average -------------------------
+
+def _facet_average_reference(f, theta_deg, spec, cov, eps, pol, cut_deg=10.0, n=241):
+    """Two-scale average by brute force with 3-D facet vectors (independent of spm.py).
+
+    For each facet normal N = (-s_x, -s_y, 1)/|.|: local incidence cos = -k_i.N; the
+    polarisation rotation from the global (h, v) to the facet's (h_l, v_l) basis by dot
+    products (h_l = k_i x N); the local Bragg wave vector from the component of the
+    incident wave vector in the facet plane, k_i - (k_i.N) N, whose horizontal direction
+    selects the spectrum; trapezoid rule over +-6 standard deviations of the Gaussian
+    slopes.  Independent re-computation of Valenzuela (1968; 1978 Eq. 9).
+    """
+    k = radar_wavenumber(f)
+    th = np.deg2rad(theta_deg)
+    chol = np.linalg.cholesky(np.array([[cov[0], cov[2]], [cov[2], cov[1]]]))
+    z = np.linspace(-6.0, 6.0, n)
+    z1, z2 = np.meshgrid(z, z, indexing="ij")
+    w = np.exp(-0.5 * (z1**2 + z2**2)) / (2 * np.pi) * (z[1] - z[0]) ** 2
+    sx = chol[0, 0] * z1
+    sy = chol[1, 0] * z1 + chol[1, 1] * z2
+    ki = np.array([np.sin(th), 0.0, -np.cos(th)])        # radar at -x looking along +x
+    h = np.cross(ki, [0.0, 0.0, 1.0])
+    h /= np.linalg.norm(h)
+    v = np.cross(h, ki)
+    nrm = np.stack([-sx, -sy, np.ones_like(sx)], -1)
+    nrm /= np.linalg.norm(nrm, axis=-1, keepdims=True)
+    cos_l = -(nrm @ ki)
+    hl = np.cross(ki, nrm)
+    hl /= np.linalg.norm(hl, axis=-1, keepdims=True)
+    c_rot, s_rot = hl @ h, hl @ v
+    g_hh, g_vv = polarization_coefficients(np.rad2deg(np.arccos(cos_l)), eps)
+    coef = {"VV": c_rot**2 * g_vv + s_rot**2 * g_hh, "HH": c_rot**2 * g_hh + s_rot**2 * g_vv,
+            "HV": c_rot * s_rot * (g_vv - g_hh)}[pol]
+    in_plane = ki - (nrm @ ki)[..., None] * nrm
+    direction = np.arctan2(in_plane[..., 1], in_plane[..., 0])
+    sin_l = np.sqrt(1.0 - cos_l**2)
+    sigma = 16 * np.pi * k**4 * cos_l**4 * np.abs(coef) ** 2 * spec(2 * k * sin_l, direction)
+    keep = (th - np.arctan(sx) >= np.deg2rad(cut_deg)) & (cos_l > 0)
+    return np.sum(np.where(keep, sigma, 0.0) * w)
+
+
+def test_tilted_facet_average_matches_exact_geometry_for_oblique_wind():
+    # A strongly anisotropic Bragg spectrum and slope ellipse along an axis 45 deg from
+    # the look direction: the cross-look component of the local Bragg vector matters.
+    # With its sign reversed (the tilted Bragg vector 2k (sin(t - psi), +cos(t - psi)
+    # sin delta)) the average was 28 % (VV) to 58 % (HH) too high here.
+    rot = np.deg2rad(45.0)
+
+    def spec(k, d):
+        return B0 / k**4 * (1 + 0.8 * np.cos(2 * (d - rot)))
+    su, sc = 0.03, 0.005
+    c, s = np.cos(rot), np.sin(rot)
+    cov = (su * c**2 + sc * s**2, su * s**2 + sc * c**2, (su - sc) * s * c)
+    for pol, tol in (("VV", 0.005), ("HH", 0.005), ("HV", 0.01)):
+        ref = _facet_average_reference(5.405e9, 40.0, spec, cov, EPS_C, pol)
+        got = tilted_bragg_nrcs(5.405e9, 40.0, spec, cov, EPS_C, pol, nodes=48)
+        assert got == pytest.approx(ref, rel=tol)   # quadrature and in-plane |K_l| only
 
 
 def test_bad_scattering_inputs():

@@ -22,7 +22,8 @@ Bragg level                       F(K_l, phi) at each tilted facet's local Bragg
 tilt slopes (Bragg part)          slope variances up/cross wind of waves k < k_d = K_B / 4
 specular slopes                   slope variances of waves k < k_sp = k_r / 4
 effective reflectivity            |R(0)|^2 exp(-4 k_r^2 h^2), h^2 = variance of k > k_sp
-breaking fraction q               wind input x curvature of waves k < k_wb = k_r / 10
+breaking fraction q               wind input x curvature of waves k < k_wb = k_r / 10,
+                                  the spectrum folded into its propagating (down-wind) form
 ================================  ==========================================================
 
 The factor multiplies S(k) in all five, so a film lowers the Bragg level, the tilt and
@@ -92,6 +93,8 @@ _NK = int(round((_LNK1 - _LNK0) / np.log(10) * 64)) + 1
 _LNK = np.linspace(_LNK0, _LNK1, _NK)
 _DLNK = _LNK[1] - _LNK[0]
 _BLOCK = 2**20   # elements per block in the slope quadrature
+_PHI_DEG = np.linspace(0.0, 90.0, 37)   # fold angles of the directional tables [degree]
+_DPHI = np.deg2rad(_PHI_DEG[1] - _PHI_DEG[0])
 
 
 def to_db(value):
@@ -144,7 +147,7 @@ class _Tables:
     """Spectral quantities per wind row on the log-k grid (internal)."""
 
     __slots__ = ("winds", "exact", "lnb", "delta", "mss_up", "mss_cross", "height_above",
-                 "q0", "q1")
+                 "q0", "q1", "lnb_dir")
 
 
 def _cumtrapz(y):
@@ -163,8 +166,24 @@ def _spectrum_tables(winds, spectrum_model, spectrum_options, spectrum_factor, w
                 "per wind speed)")
     k = np.exp(_LNK)
     u = winds[:, None]
-    b = np.asarray(_spec.curvature(k[None, :], u, model=spectrum_model, **opts), dtype=float)
-    d = np.asarray(_spec.spreading(k[None, :], u, model=spectrum_model, **opts), dtype=float)
+    model = check_choice("model", spectrum_model, _spec.MODELS)
+    b_dir = None
+    if model == "elfouhaily1997":
+        b = np.asarray(_spec.curvature(k[None, :], u, model=model, **opts), dtype=float)
+        d = np.asarray(_spec.spreading(k[None, :], u, model=model, **opts), dtype=float)
+    else:
+        # the spreading of this model is not of the form (1 + Delta cos 2 phi): tabulate its
+        # own folded (centrosymmetric) directional spectrum B_f, instead of the truncated
+        # second-harmonic form B (1 + Delta cos 2 phi), which turns negative where
+        # Delta > 1; B and Delta are its integrals (trapezoid rule on the fold angles)
+        b_f = np.asarray(_spec.directional_curvature(
+            k[None, :, None], _PHI_DEG[None, None, :], u[:, :, None], model=model,
+            centrosymmetric=True, **opts), dtype=float)
+        phi = np.deg2rad(_PHI_DEG)
+        b = 4.0 * np.trapezoid(b_f, phi, axis=-1)             # integral over the circle
+        harm = 8.0 * np.trapezoid(b_f * np.cos(2.0 * phi), phi, axis=-1)
+        d = np.where(b > 0, harm / np.where(b > 0, b, 1.0), 0.0)
+        b_dir = 2.0 * np.pi * b_f
     b, d = np.broadcast_arrays(b, d)
     if spectrum_factor is not None:
         fac = np.asarray(spectrum_factor(k), dtype=float)
@@ -176,15 +195,21 @@ def _spectrum_tables(winds, spectrum_model, spectrum_options, spectrum_factor, w
         if not np.all(np.isfinite(fac)) or np.any(fac < 0):
             raise ShortwaveInputError("spectrum_factor: values must be finite and >= 0")
         b = b * fac
+        if b_dir is not None:
+            b_dir = b_dir * fac[:, None]
     t = _Tables()
     t.winds = winds
     t.lnb = np.log(np.maximum(b, 1e-300))
+    # folded directional curvature times 2 pi on the fold angle grid _PHI_DEG, or None
+    # for the Elfouhaily spectrum (exactly B (1 + Delta cos 2 phi))
+    t.lnb_dir = None if b_dir is None else np.log(np.maximum(b_dir, 1e-300))
     t.delta = d
     t.mss_up = _cumtrapz(b * (0.5 + 0.25 * d))      # slope variance along the wind below k
     t.mss_cross = _cumtrapz(b * (0.5 - 0.25 * d))   # ... across the wind
     h = b / k**2                                     # S dk = B k^-2 dln k
     t.height_above = _cumtrapz(h[..., ::-1])[..., ::-1]  # variance of waves above k
-    # breaking: wind input C_beta (u*/c)^2, direction integrals I0, I1 (breaking.py)
+    # breaking: wind input C_beta (u*/c)^2 times the spectrum folded into its propagating
+    # form, direction integrals I0, I1 (breaking.py)
     law = opts.get("ustar_law", "constant-drag")
     if "friction_velocity" in opts:
         ustar = np.full(winds.shape, float(opts["friction_velocity"]))
@@ -236,6 +261,39 @@ def _interp(table, row, frac, lnk):
     nxt = np.minimum(row + 1, nw - 1) * nk + i
     hi = flat[nxt] * (1 - t) + flat[nxt + 1] * t
     return lo * (1 - frac) + hi * frac
+
+
+def _fold_angle(angle):
+    """Angle from the wind axis folded into [0, pi/2] [rad] (centrosymmetric, mirror)."""
+    return np.abs(np.mod(angle + 0.5 * np.pi, np.pi) - 0.5 * np.pi)
+
+
+def _directional_level(tab, row, frac, lnk, angle):
+    """Folded directional curvature times 2 pi, B_f(k, phi) 2 pi [1], at ``angle`` from
+    the wind axis [rad]: B (1 + Delta cos 2 phi) for the Elfouhaily spectrum, else
+    trilinear interpolation of the model's own table in wind, ln k and angle."""
+    if tab.lnb_dir is None:
+        return (np.exp(_interp(tab.lnb, row, frac, lnk))
+                * (1.0 + _interp(tab.delta, row, frac, lnk) * np.cos(2.0 * angle)))
+    nw, nk, nphi = tab.lnb_dir.shape
+    pos = _fold_angle(angle) / _DPHI
+    j = np.clip(np.floor(pos).astype(np.intp), 0, nphi - 2)
+    tj = np.clip(pos - j, 0.0, 1.0)
+    posk = (lnk - _LNK0) / _DLNK
+    i = np.clip(np.floor(posk).astype(np.intp), 0, nk - 2)
+    ti = np.clip(posk - i, 0.0, 1.0)
+    flat = tab.lnb_dir.ravel()
+
+    def at_row(r):                    # bilinear in (ln k, angle) on wind row r
+        base = (r * nk + i) * nphi + j
+        lo = flat[base] * (1 - tj) + flat[base + 1] * tj
+        hi = flat[base + nphi] * (1 - tj) + flat[base + nphi + 1] * tj
+        return lo * (1 - ti) + hi * ti
+
+    val = at_row(row)
+    if nw > 1:
+        val = val * (1 - frac) + at_row(np.minimum(row + 1, nw - 1)) * frac
+    return np.exp(val)
 
 
 def _permittivity(frequency_hz, water, permittivity, permittivity_model):
@@ -313,21 +371,17 @@ def backscatter_components(frequency_hz, incidence_deg, wind_speed, polarization
 
     def bragg_spectrum(rows, fracs, angles):
         def f(kk, direction):
-            lnk = np.log(kk)
-            lnb = _interp(tab.lnb, rows[:, None], fracs[:, None], lnk)
-            dl = _interp(tab.delta, rows[:, None], fracs[:, None], lnk)
             k2 = kk * kk
-            return (np.exp(lnb) / (k2 * k2) / (2 * np.pi)
-                    * (1.0 + dl * np.cos(2.0 * (direction - angles[:, None]))))
+            level = _directional_level(tab, rows[:, None], fracs[:, None], np.log(kk),
+                                       direction - angles[:, None])
+            return level / (k2 * k2) / (2 * np.pi)      # Cartesian F = B(k, phi) / k^4
         return f
 
     if "bragg" in parts:
         if pol == "HV":
             out["bragg"] = np.zeros(shape).ravel()
         else:
-            lnk = np.log(k_b)
-            f_b = (np.exp(_interp(tab.lnb, row, frac, lnk)) / k_b**4 / (2 * np.pi)
-                   * (1.0 + _interp(tab.delta, row, frac, lnk) * np.cos(2.0 * a)))
+            f_b = _directional_level(tab, row, frac, np.log(k_b), a) / k_b**4 / (2 * np.pi)
             g_hh, g_vv = _g_coefficients(th, eps)
             g = g_vv if pol == "VV" else g_hh
             out["bragg"] = 16 * np.pi * k_r**4 * np.cos(th) ** 4 * np.abs(g) ** 2 * f_b  # SPM
@@ -519,8 +573,10 @@ def breaking_fraction(frequency_hz, wind_speed, azimuth_deg=0.0, *,
     Notes
     -----
     q = c_q int_{k < k_wb} int beta(k, phi) B(k, phi) w(phi) dphi dln k with
-    beta = C_beta (u*/c)^2 cos phi |cos phi| (Kudryavtsev et al. 2003 [2]_, from memory)
-    and the breaker-orientation weight w of :mod:`shortwave.radar.breaking`.
+    beta = C_beta (u*/c)^2 cos phi |cos phi| (Kudryavtsev et al. 2003 [2]_; form and
+    constants from memory, see :mod:`shortwave.radar.breaking`), B(k, phi) the spectrum
+    folded into its propagating form (all waves within 90 deg of down-wind) and w the
+    breaker-orientation weight.  An order of magnitude, not a calibrated value.
 
     Examples
     --------

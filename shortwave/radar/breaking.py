@@ -17,12 +17,46 @@ waves, weighted by the fraction q of the surface they cover:
   beta = C_beta (u*/c)^2 cos(phi)|cos(phi)| (only waves with a down-wind component break
   by wind forcing), c_q = 10.5, C_beta = 1.5.
 
-The form and constants above are as we recall them from KHCC 2003 (their section on
-non-Bragg scattering); the text of the paper could not be opened while writing this
-module, so they are **from memory** and exposed as parameters.  Applied here with the
-spectrum chosen in :func:`shortwave.radar.nrcs` (Elfouhaily et al. 1997 by default) instead
-of KHCC's own short-wave spectrum, so q is an application of their parameterisation, not
-their calibrated value.
+**Provenance of each constant (none could be checked against the printed paper).**  The
+text of KHCC 2003 and of its restatements (Kudryavtsev et al. 2005, JGR 110, C07016;
+Yurovsky et al. 2019, Remote Sens.) could not be opened while this module was reviewed:
+only their abstracts were readable.  They confirm the structure -- a polarisation-
+independent ("non-polarized") breaker term sigma_wb times the breaker footprint fraction,
+added to the Bragg and specular returns of the regular surface, with sigma_wb compared to
+a geometric-optics model of breaker backscatter (abstracts of KHCC 2003, Kudryavtsev et
+al. 2005 and Yurovsky et al. 2019) -- but give no constants.  So:
+
+* s_wb^2 = 0.19 (slope variance of a breaking zone): from memory (KHCC 2003).
+* eps_wb = 0.005 (ratio of the vertical to the horizontal scale of a breaking zone):
+  from memory (KHCC 2003).
+* the form of sigma_wb (geometric optics of a very rough facet plus a floor): from
+  memory (KHCC 2003); only its identities (nadir value (1 + eps_wb)/s_wb^2, grazing
+  limit eps_wb/s_wb^2) are tested.
+* c_q = 10.5: from memory (KHCC 2003).
+* k_wb = k_r/10: from memory (KHCC 2003).
+* C_beta = 1.5: from memory and **doubtful**.  In Kudryavtsev's framework the growth
+  rate in units of omega includes rho_a/rho_w and is of order 0.03-0.04 (u*/c)^2 (the
+  mean growth-rate constant C_beta = 0.03 of the ATBD restatement, spectra research note
+  Sec. 9.2; Plant 1982, from memory), which with c_q = 10.5 would make q about 40 times
+  smaller and the breaking term negligible at C band.  Only the product c_q C_beta
+  matters: treat q as an order of magnitude (about 1 % at C band, 10 m/s, the order of
+  the whitecap coverage at that wind, from memory), not a calibrated value.
+
+The constants are module constants (s_wb^2 and eps_wb also parameters of
+:func:`breaker_nrcs`).  Applied here with the
+spectrum chosen in :func:`shortwave.radar.nrcs` (Elfouhaily et al. 1997 by default)
+instead of KHCC's own short-wave spectrum, so q is an application of their
+parameterisation, not their calibrated value.
+
+**Centrosymmetric spectra (a factor 2).**  KHCC's spectrum carries the propagation
+direction: nearly all the short-gravity-wave variance travels with a down-wind component.
+A centrosymmetric (frozen-surface) spectrum such as Elfouhaily et al. (1997) puts half of
+it in the up-wind half-plane.  Integrating cos(phi)|cos(phi)| against the symmetric
+spectrum over |phi| < 90 deg would count only half of the waves, and over the full
+circle it gives zero.  The spectrum is therefore first folded into its propagating form
+(all waves within 90 deg of down-wind, 2 B(k, phi) there and 0 behind; spectra research
+note Sec. 4.3, :func:`shortwave.spectrum.convert.fold_downwind`), which keeps the variance
+and the slope tensor.
 
 **Breaker orientation (our choice, not from KHCC 2003).**  A breaking zone sits on the
 forward face of its wave, so a radar sees it best when the breaker travels toward the
@@ -51,15 +85,18 @@ __all__ = ["BREAKER_SLOPE_VARIANCE", "BREAKER_REFLECTIVITY", "BREAKING_FRACTION_
            "wind_input_directional_factors"]
 
 BREAKER_SLOPE_VARIANCE = 0.19
-"""s_wb^2, slope variance of a breaking zone (KHCC 2003, from memory)."""
+"""s_wb^2, slope variance of a breaking zone (KHCC 2003; from memory, not verified)."""
 BREAKER_REFLECTIVITY = 0.005
-"""eps_wb, incoherent floor of the breaking-zone cross-section (KHCC 2003, from memory)."""
+"""eps_wb, ratio of the vertical to the horizontal scale of a breaking zone, giving the
+floor eps_wb/s_wb^2 of sigma_wb (KHCC 2003; from memory, not verified)."""
 BREAKING_FRACTION_CONSTANT = 10.5
-"""c_q in q = c_q int beta B dln k (KHCC 2003, from memory)."""
+"""c_q in q = c_q int beta B dphi dln k (KHCC 2003; from memory, not verified)."""
 WIND_INPUT_CONSTANT = 1.5
-"""C_beta in beta = C_beta (u*/c)^2 (Kudryavtsev et al. 1999/2003, from memory)."""
+"""C_beta in beta = C_beta (u*/c)^2 cos(phi)|cos(phi)| (Kudryavtsev et al. 1999/2003;
+from memory, not verified, and doubtful: see the module docstring)."""
 BREAKER_CUTOFF_RATIO = 0.1
-"""k_wb / k_r: only waves longer than ten radar wavelengths count (KHCC 2003, from memory)."""
+"""k_wb / k_r: only waves longer than ten radar wavelengths count (KHCC 2003; from
+memory, not verified)."""
 
 
 def breaker_nrcs(incidence_deg, slope_variance=BREAKER_SLOPE_VARIANCE,
@@ -98,14 +135,15 @@ def breaker_nrcs(incidence_deg, slope_variance=BREAKER_SLOPE_VARIANCE,
 
 
 def wind_input_directional_factors(spreading):
-    """Direction integrals of the wind input times the spectrum, per unit omnidirectional B.
+    """Direction integrals of the wind input times the folded spectrum, per unit B(k).
 
-    With B(k, phi) = B(k) (1 + Delta cos 2 phi) / (2 pi) (centrosymmetric) and the wind
-    input cos(phi)|cos(phi)| kept for |phi| < 90 deg, the breaking integrand integrated
-    over the breaker direction phi with the orientation weight 1 + a cos(phi - phi_R) is
-    B(k) [I0 + a cos(phi_R) I1] with
+    The centrosymmetric spectrum B(k, phi) = B(k) (1 + Delta cos 2 phi) / (2 pi) is first
+    folded into its propagating form, 2 B(k, phi) for |phi| < 90 deg and 0 behind (see
+    the module docstring).  With the wind input cos(phi)|cos(phi)| and the breaker
+    orientation weight 1 + a cos(phi - phi_R), the integral over the breaker direction
+    phi is B(k) [I0 + a cos(phi_R) I1] with
 
-        I0 = 1/4 + Delta/8,      I1 = 2/(3 pi) + 2 Delta/(5 pi)      [independent algebra]
+        I0 = 1/2 + Delta/4,      I1 = 4/(3 pi) + 4 Delta/(5 pi)      [independent algebra]
 
     Parameters
     ----------
@@ -117,11 +155,18 @@ def wind_input_directional_factors(spreading):
     (numeric, numeric)
         I0, I1 (dimensionless).
 
+    Notes
+    -----
+    I0 is exact for any folded spreading (it is half the along-wind slope fraction
+    1/2 + Delta/4 of the full circle, doubled by the fold); I1 assumes the
+    (1 + Delta cos 2 phi) form.
+
     Examples
     --------
     >>> i0, i1 = wind_input_directional_factors(0.0)
     >>> round(float(i0), 4), round(float(i1), 4)
-    (0.25, 0.2122)
+    (0.5, 0.4244)
     """
     d = np.asarray(spreading, dtype=float)
-    return scalar_or_array(0.25 + d / 8.0), scalar_or_array((2.0 / 3.0 + 0.4 * d) / np.pi)
+    return (scalar_or_array(0.5 + d / 4.0),                       # 2 (1/4 + Delta/8)
+            scalar_or_array((4.0 / 3.0 + 0.8 * d) / np.pi))        # 2 (2/3 + 2 Delta/5)/pi

@@ -302,10 +302,13 @@ def tilted_bragg_nrcs(frequency_hz, incidence_deg, spectrum, slope_variance, per
     Radar at -x looking along +x; slopes s_x (in the plane of incidence), s_y (across).
     psi = arctan s_x, delta = arcsin(s_y / sqrt(1 + s_x^2 + s_y^2)); local incidence
     cos t_l = cos(t - psi) cos delta; mixing alpha = sin(t - psi) cos delta / sin t_l,
-    beta = sin delta / sin t_l; local Bragg vector 2 k (sin(t - psi), cos(t - psi) sin
-    delta).  Patch cross-sections (Valenzuela 1968 [2]_; 1978 [3]_ Eq. 9, with psi of the
-    opposite sign): sigma_VV = 16 pi k^4 cos^4 t_l |alpha^2 g_VV + beta^2 g_HH|^2 F(K_l),
-    sigma_HH with g_VV and g_HH exchanged, sigma_HV = 16 pi k^4 cos^4 t_l |alpha beta
+    beta = sin delta / sin t_l; local Bragg vector 2 k (sin(t - psi), -cos(t - psi) sin
+    delta), the horizontal direction of the incident wave vector's component in the
+    facet plane (a facet rising toward +y turns the Bragg vector toward -y; exact facet
+    geometry, checked against a vector re-computation in the tests), of length
+    2 k sin t_l.  Patch cross-sections (Valenzuela 1968 [2]_; 1978 [3]_ Eq. 9, with psi
+    of the opposite sign): sigma_VV = 16 pi k^4 cos^4 t_l |alpha^2 g_VV + beta^2 g_HH|^2
+    F(K_l), sigma_HH with g_VV and g_HH exchanged, sigma_HV = 16 pi k^4 cos^4 t_l |alpha beta
     (g_VV - g_HH)|^2 F(K_l).  The average over the zero-mean Gaussian slope density is a
     tensor-product quadrature held as an array axis (not a loop): Gauss-Legendre in the
     along-look slope over [-6 sd, tan(theta - min_local_incidence)] (a smooth integrand
@@ -368,7 +371,7 @@ def tilted_bragg_nrcs(frequency_hz, incidence_deg, spectrum, slope_variance, per
     else:
         coef = alpha * beta * (g_vv - g_hh)
     k_l = 2.0 * k[e] * safe_sin_l                         # |K_l| = 2 k sin t_l
-    direction = np.arctan2(cos_tp * sin_d, sin_tp)        # of K_l, from the look direction
+    direction = np.arctan2(-cos_tp * sin_d, sin_tp)       # of K_l, from the look direction
     f = np.asarray(spectrum(k_l, direction), dtype=float)
     cos2 = cos_l * cos_l
     power = coef.real**2 + coef.imag**2

@@ -4,8 +4,14 @@ Published anchors: Crombie's (1955) half-wavelength resonance at grazing, the HF
 rule 0.102 sqrt(f0 [MHz]) Hz (Barrick; common practice of HF radar), the limits of the
 first-order polarisation coefficients (perfect conductor; normal incidence) and the nadir
 reflectivity of sea water.  The scattering check values are independent re-computations
-of the stated equations (regression values, not measurements); larger tables are in
-``tests/test_radar_*.py`` and ``tests/reference/``.
+of the stated equations (regression values, not measurements), among them a brute-force
+3-D facet-vector re-computation of the tilted-facet average for a wind axis oblique to
+the look; larger tables are in ``tests/test_radar_*.py`` and ``tests/reference/``.
+
+The breaking-wave term (Kudryavtsev et al. 2003) is listed with its recalled form and
+constants labelled "from memory": the paper's text could not be read, so those rows only
+pin the implemented form, not a published value.  No published empirical C-band level
+(geophysical model function table) could be read either, so none is listed.
 """
 from __future__ import annotations
 
@@ -14,6 +20,7 @@ import numpy as np
 from ..radar.bands import SPEED_OF_LIGHT
 from ..radar.bragg import bragg_frequency, bragg_wavelength
 from ..radar.spm import polarization_coefficients, spm_nrcs_curvature, tilted_bragg_nrcs
+from ..radar.breaking import breaker_nrcs
 from ..radar.specular import fresnel_nadir_reflectivity, specular_nrcs
 from ..water import Liquid
 from . import Check
@@ -34,6 +41,16 @@ _RECOMP_GO = ("independent re-computation of the geometric-optics term (Barrick 
               "with |R(0)|^2 = 0.6367 (radar research note, Sec. 4.5)")
 _RECOMP_CAP = ("independent re-computation of omega^2 = g K + tau K^3 (Lamb 1932, Art. "
                "267) at K_B, tau = 7.25e-5 m3 s-2 (radar research note, Sec. 2.6)")
+_RECOMP_FACET = ("independent re-computation of the two-scale average with 3-D facet "
+                 "vectors (local incidence -k_i.N, polarisation basis rotation by dot "
+                 "products, local Bragg vector from the in-plane part of k_i; Valenzuela "
+                 "1968 geometry), trapezoid rule on 801 x 801 slopes: Bragg spectrum "
+                 "B = 0.005 (1 + 0.8 cos 2(phi - 45 deg)), slope variances 0.03 / 0.005 "
+                 "along / across the 45-deg axis, C band, 40 deg")
+_KHCC_MEMORY = ("from memory, not verified: breaking-zone cross-section sigma_wb = "
+                "sec^4 t / s^2 exp(-tan^2 t / s^2) + eps / s^2 with s^2 = 0.19, eps = 0.005 "
+                "(Kudryavtsev, Hauser, Caudal & Chapron 2003, JGR 108(C3) 8054; the paper "
+                "text could not be read)")
 _EPS_C = 66.225 - 34.393j
 _TAU_LIQUID = Liquid(density=1000.0, surface_tension=0.0725, kinematic_viscosity=1e-6,
                      name="tau 7.25e-5")
@@ -109,6 +126,24 @@ CHECKS = [
           "specular sigma0, isotropic s^2 = 0.03, 10 deg, |R|^2 = 0.6367", "dB",
           lambda: _db(specular_nrcs(10.0, 0.015, 0.015, 0.6367)), 9.03, _RECOMP_GO,
           atol=0.005, tolerance_reason="printed to 2 decimals"),
+    Check("radar.two_scale.exact_facet_geometry_oblique_wind_vv",
+          "two-scale sigma0 VV, wind axis 45 deg from the look, anisotropic spectrum and "
+          "slopes", "1", lambda: _oblique("VV"), 0.1008897, _RECOMP_FACET, rtol=0.005,
+          tolerance_reason="the model takes the first-order direction of the local Bragg "
+                           "vector (0.1 % here); a sign error in its cross-look component "
+                           "gives +28 %"),
+    Check("radar.two_scale.exact_facet_geometry_oblique_wind_hh",
+          "two-scale sigma0 HH, wind axis 45 deg from the look, anisotropic spectrum and "
+          "slopes", "1", lambda: _oblique("HH"), 0.0293344, _RECOMP_FACET, rtol=0.005,
+          tolerance_reason="as for VV (a cross-look sign error gives +58 %)"),
+    Check("radar.breaking.sigma_wb_nadir",
+          "breaking-zone cross-section at normal incidence, (1 + eps)/s^2", "1",
+          lambda: breaker_nrcs(0.0), (1 + 0.005) / 0.19, _KHCC_MEMORY, rtol=1e-12,
+          tolerance_reason="identity of the recalled form"),
+    Check("radar.breaking.sigma_wb_floor",
+          "breaking-zone cross-section at 85 deg, tending to the floor eps/s^2", "1",
+          lambda: breaker_nrcs(85.0), 0.005 / 0.19, _KHCC_MEMORY, rtol=1e-6,
+          tolerance_reason="the specular part is below 1e-300 there"),
     Check("radar.bragg_frequency.ku_45deg_capillary",
           "deep-water Bragg frequency, Ku 13.575 GHz, 45 deg, capillary-gravity", "Hz",
           lambda: bragg_frequency(13.575e9, 45.0, water=_TAU_LIQUID), 14.82, _RECOMP_CAP,
@@ -124,3 +159,13 @@ def _mw(f, t, s):
 def _tilted(theta, pol):
     return tilted_bragg_nrcs(5.405e9, theta, lambda k, d: 0.005 / k**4, (0.01, 0.01, 0.0),
                              _EPS_C, pol, nodes=64)
+
+
+def _oblique(pol):
+    rot = np.deg2rad(45.0)
+    su, sc = 0.03, 0.005
+    c, s = np.cos(rot), np.sin(rot)
+    cov = (su * c**2 + sc * s**2, su * s**2 + sc * c**2, (su - sc) * s * c)
+    return tilted_bragg_nrcs(5.405e9, 40.0,
+                             lambda k, d: 0.005 / k**4 * (1 + 0.8 * np.cos(2 * (d - rot))),
+                             cov, _EPS_C, pol, nodes=48)
