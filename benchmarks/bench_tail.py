@@ -20,7 +20,6 @@ from __future__ import annotations
 
 import argparse
 import os
-import resource
 import subprocess
 import sys
 import tempfile
@@ -47,8 +46,7 @@ def make_file(path, n_spectra):
         parts.append(ds)
     ds = xr.concat(parts, dim="time", data_vars="minimal", coords="minimal",
                    compat="override")
-    enc = netcdf_encoding(ds)
-    enc["spectrum"] = {"zlib": True, "complevel": 1, "dtype": "float32"}
+    enc = netcdf_encoding(ds)        # float32, zlib 1, one output time per HDF5 chunk
     write_netcdf(ds, path, encoding=enc, overwrite=True, command="bench_tail make_file")
     return ds.sizes["time"] * ds.sizes["station"]
 
@@ -65,10 +63,12 @@ def io_floor(src, dst):
 
 
 def run_extend(src, dst, *extra):
+    import contextlib
+    import io
     from shortwave.cli import main
     t0 = time.perf_counter()
-    rc = main(["extend", src, "-o", dst, "--overwrite", "--no-progress", "--format", "csv",
-               *extra])
+    with contextlib.redirect_stdout(io.StringIO()):
+        rc = main(["extend", src, "-o", dst, "--overwrite", "--no-progress", *extra])
     dt = time.perf_counter() - t0
     if rc != 0:
         raise SystemExit(f"extend failed with status {rc}")
@@ -76,17 +76,25 @@ def run_extend(src, dst, *extra):
 
 
 def peak_memory(src, dst, *extra):
-    """Peak RSS [MiB] of a fresh Python process running extend (and its own baseline)."""
+    """Peak RSS [MiB] of a fresh Python process running extend (and its own baseline).
+
+    Linux VmHWM of /proc/self/status (the high-water mark of this process image;
+    ru_maxrss would include the parent's memory copied at fork).
+    """
     code = (
-        "import resource, sys, io, contextlib\n"
-        "import shortwave.tail, shortwave.ncio, xarray, dask.array\n"
-        "base = resource.getrusage(resource.RUSAGE_SELF).ru_maxrss\n"
+        "import io, contextlib\n"
+        "def hwm():\n"
+        "    for line in open('/proc/self/status'):\n"
+        "        if line.startswith('VmHWM:'):\n"
+        "            return int(line.split()[1]) / 1024\n"
+        "import shortwave.tail, shortwave.ncio, shortwave.cli, xarray, dask.array\n"
+        "import shortwave.commands.extend, shortwave.plots.tail\n"
+        "base = hwm()\n"
         "from shortwave.cli import main\n"
         "with contextlib.redirect_stdout(io.StringIO()):\n"
         f"    rc = main(['extend', {src!r}, '-o', {dst!r}, '--overwrite', '--no-progress',"
         f" *{list(extra)!r}])\n"
-        "peak = resource.getrusage(resource.RUSAGE_SELF).ru_maxrss\n"
-        "print(rc, base / 1024, peak / 1024)\n")
+        "print(rc, base, hwm())\n")
     res = subprocess.run([sys.executable, "-c", code], capture_output=True, text=True,
                          check=False)
     if res.returncode != 0:
@@ -115,6 +123,7 @@ def main(argv=None):
     chunk = ["--chunk-spectra", str(a.chunk_spectra)]
     rows = []
     for label, extra in (("extend, spectra + moments", chunk),
+                         ("extend, spectra zlib level 1", chunk + ["--compress", "1"]),
                          ("extend --moments-only", chunk + ["--moments-only"]),
                          ("extend, no chunks (in memory)", ["--chunk-spectra", "0"])):
         dst = os.path.join(folder, "out.nc")
@@ -131,10 +140,13 @@ def main(argv=None):
         mb4 = os.path.getsize(big) / 2**20
         print(f"\npeak resident memory of a fresh process (MiB; baseline = after imports):")
         print(f"{'input':34s} {'file MiB':>9s} {'baseline':>9s} {'peak':>8s} {'peak-base':>10s}")
+        small = ["--chunk-spectra", str(max(a.chunk_spectra // 4, 1))]
         for label, path, size, extra in (
                 (f"{n} spectra, chunks {a.chunk_spectra}", src, mb, chunk),
                 (f"{n4} spectra, chunks {a.chunk_spectra}", big, mb4, chunk),
-                (f"{n} spectra, no chunks", src, mb, ["--chunk-spectra", "0"])):
+                (f"{n4} spectra, chunks {small[1]}", big, mb4, small),
+                (f"{n} spectra, no chunks", src, mb, ["--chunk-spectra", "0"]),
+                (f"{n4} spectra, no chunks", big, mb4, ["--chunk-spectra", "0"])):
             base, peak = peak_memory(path, os.path.join(folder, "mem.nc"), *extra)
             print(f"{label:34s} {size:9.1f} {base:9.0f} {peak:8.0f} {peak - base:10.0f}")
         out_chunk = a.chunk_spectra * 226 * 36 * 4 / 2**20

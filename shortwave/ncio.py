@@ -101,7 +101,7 @@ def write_netcdf(ds, path, *, inputs=(), overwrite=False, command=None, encoding
     Returns
     -------
     str
-        The path written.
+        The path written (permissions 0666 less the umask, like any new file).
 
     Raises
     ------
@@ -603,10 +603,10 @@ def register_role(name, standard_names=(), names=(), units=None, description="",
 
     Examples
     --------
-    >>> r = register_role("sea_surface_temperature", ("sea_surface_temperature",),
-    ...                   ("sst", "SST"), "K", "sea surface temperature")
-    >>> ROLES["sea_surface_temperature"].units
+    >>> r = register_role("air_temperature_example", ("air_temperature",), ("t2m",), "K")
+    >>> ROLES["air_temperature_example"].units
     'K'
+    >>> del ROLES["air_temperature_example"]
     """
     role = Role(tuple(standard_names), tuple(names), units, description or name, bool(axis))
     ROLES[name] = role
@@ -761,7 +761,8 @@ def read_role(ds, role, overrides=None, units=None):
     target = ROLES[role].units
     if target is None:
         return da
-    return convert_units(da, target, f"{da.name} ({role})")
+    label = str(da.name) if da.name == role else f"{da.name} ({role})"
+    return convert_units(da, target, label)
 
 
 def parse_chunks(text):

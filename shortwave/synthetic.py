@@ -40,7 +40,7 @@ PM_ALPHA = 8.1e-3
 """Phillips constant of the Pierson-Moskowitz spectrum (Pierson & Moskowitz 1964)."""
 
 PM_BETA = 0.74
-"""beta of the Pierson-Moskowitz spectrum exp(-beta (g / (U19.5 omega))^4) (Pierson & Moskowitz 1964)."""
+"""beta in exp(-beta (g / (U19.5 omega))^4) of Pierson & Moskowitz (1964)."""
 
 PM_OMEGA_PEAK = (4.0 * PM_BETA / 5.0) ** 0.25
 """omega_p U19.5 / g of Pierson-Moskowitz: (4 beta / 5)^(1/4) = 0.8772."""
@@ -248,10 +248,10 @@ def _finish(ds, f, theta, *, convention, per_degree, direction_units, bounds):
     if direction_units == "radian":
         th = np.deg2rad(th)
         units = "rad"
+    words = "come from" if convention == "from" else "travel to"
     dr = xr.DataArray(th, dims="direction",
                       attrs={"standard_name": f"sea_surface_wave_{convention}_direction",
-                             "long_name": f"direction the waves {'come from' if convention == 'from' else 'travel to'}",
-                             "units": units})
+                             "long_name": f"direction the waves {words}", "units": units})
     ds = ds.assign_coords(frequency=fr, direction=dr)
     if bounds:
         r = f[1] / f[0]
@@ -467,7 +467,8 @@ def netcdf_encoding(ds, packed=False, name="spectrum"):
     -------
     dict
         For :func:`shortwave.ncio.write_netcdf` (``encoding=``): no ``_FillValue`` on
-        coordinate variables (CF 2.5.1), and the packing if asked.
+        coordinate variables (CF 2.5.1); the spectra zlib-compressed in HDF5 chunks of one
+        output time, and packed if asked.
 
     Examples
     --------
@@ -478,9 +479,13 @@ def netcdf_encoding(ds, packed=False, name="spectrum"):
     enc = {c: {"_FillValue": None} for c in ds.coords if ds[c].dtype.kind == "f"}
     if "frequency_bounds" in ds:
         enc["frequency_bounds"] = {"_FillValue": None}
+    var = ds[name]
+    # one output time per HDF5 chunk, as a wave model writes its records
+    enc[name] = {"zlib": True, "complevel": 1,
+                 "chunksizes": tuple(1 if d == "time" else n for d, n in var.sizes.items())}
     if packed:
-        vmax = float(np.nanmax(np.asarray(ds[name])))
+        vmax = float(np.nanmax(np.asarray(var)))
         scale = vmax / 32766.0 if vmax > 0 else 1.0
-        enc[name] = {"dtype": "int16", "scale_factor": scale, "add_offset": 0.0,
-                     "_FillValue": np.int16(-32768), "zlib": True}
+        enc[name].update({"dtype": "int16", "scale_factor": scale, "add_offset": 0.0,
+                          "_FillValue": np.int16(-32768)})
     return enc

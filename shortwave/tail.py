@@ -41,8 +41,8 @@ wavenumber_of_frequency`), with a k^-3 shape inside the interval (constant curva
 
 Conventions: directions in degrees, in the convention of the file ("from" or "to"; a
 180 degree flip leaves every slope moment unchanged); wind direction is where the wind
-comes *from* (CF ``wind_from_direction``).  The model spectra are centrosymmetric frozen-
-surface forms unless the model has a propagating form; the resolved part keeps the
+comes *from* (CF ``wind_from_direction``).  The tail is the model's centrosymmetric
+(frozen-surface) form, as radar and slope statistics use it; the resolved part keeps the
 direction of travel of the wave model.
 
 Bad input: NaN anywhere in a spectrum gives NaN outputs for that spectrum (counted by the
@@ -76,7 +76,8 @@ __all__ = ["K_MAX", "POINTS_PER_DECADE", "TRANSITION_RATIO", "INVERSE_WAVE_AGE_R
            "TAIL_MODELS", "OUTPUTS", "frequency_edges", "wavenumber_grid",
            "transition_weight", "peak_inverse_wave_age", "extend_spectra",
            "prepare_inputs", "wind_inputs", "depth_input", "extend_dataset",
-           "count_spectra", "chunk_plan", "output_encoding", "spectrum_parts", "TAIL_METADATA"]
+           "count_spectra", "chunk_plan", "splits_stored_chunks", "output_encoding",
+           "spectrum_parts", "TAIL_METADATA"]
 
 K_MAX = 2000.0
 """Default upper wavenumber of the extended spectra [rad m-1].
@@ -338,8 +339,8 @@ def extend_spectra(E, frequency_hz, direction_deg, wind_speed, wind_direction_de
                    depth=np.inf, *, convention="from", frequency_bounds=None, k_max=K_MAX,
                    points_per_decade=POINTS_PER_DECADE, wavenumber_edges=None,
                    transition_ratio=TRANSITION_RATIO, model="elfouhaily1997",
-                   inverse_wave_age="peak", water=None, parts=False,
-                   negative_tolerance=1e-6, block=256, name="E", **model_kw):
+                   inverse_wave_age="peak", water=None, parts=False, spectra=True,
+                   negative_tolerance=1e-6, block=64, name="E", **model_kw):
     """Extend frequency-direction spectra with a capillary-gravity tail (module docstring).
 
     Parameters
@@ -383,11 +384,14 @@ def extend_spectra(E, frequency_hz, direction_deg, wind_speed, wind_direction_de
     parts : bool
         Also return the resolved and tail parts of the output spectrum, and the pure
         model spectrum, on the output grid (for figures).
+    spectra : bool
+        Return the extended spectra and curvature spectra (False: only the per-spectrum
+        values, less memory).
     negative_tolerance : float
         Densities below -tolerance * max(E) of their spectrum are an error; smaller
         negative values (rounding of packed data) are set to 0.
     block : int
-        Spectra processed together (bounds the temporary memory).
+        Spectra processed together (bounds the temporary memory: about 0.3 MB each).
     name : str
         Name of the spectrum in error messages.
     **model_kw
@@ -485,14 +489,13 @@ def extend_spectra(E, frequency_hz, direction_deg, wind_speed, wind_direction_de
             f"transition band {ratio * k_seam_u.max():g} rad m-1; raise k_max")
 
     out = {"wavenumber": Kc, "wavenumber_bounds": np.stack([K[:-1], K[1:]], -1)}
-    spec_out = np.full((n, nk, nth), np.nan, dtype=np.float32)
-    curv_out = np.full((n, nk), np.nan)
+    spec_out = np.full((n, nk, nth) if spectra else (0, nk, nth), np.nan, dtype=np.float32)
+    curv_out = np.full((n, nk) if spectra else (0, nk), np.nan)
     res = {key: np.full(n, np.nan) for key in OUTPUTS[2:]}
     if parts:
         part_arrays = {key: np.full((n, nk, nth), np.nan) for key in
                        ("resolved_spectrum", "tail_spectrum", "model_spectrum")}
 
-    cos2 = None
     for start in range(0, n, max(int(block), 1)):
         sl = slice(start, min(start + max(int(block), 1), n))
         e = np.array(E2[sl], dtype=float)
@@ -517,7 +520,7 @@ def extend_spectra(E, frequency_hz, direction_deg, wind_speed, wind_direction_de
         j = np.clip(_row_locate(ke, K), 0, nf - 1)                    # (m, nk+1)
         rows = np.arange(m)[:, None]
         a, b = ke[rows, j], ke[rows, j + 1]
-        frac = np.clip((a**-2 - K[None, :] ** -2) / (a**-2 - b**-2), 0.0, 1.0)
+        frac = np.clip((a**-2 - K[None, :] ** -2) / (a**-2 - b**-2), 0.0, 1.0)  # step 1
         Cout = C[rows, j] + frac[..., None] * V[rows, j]              # (m, nk+1, nth)
         Cout = np.where((K[None, :] <= ke[:, :1])[..., None], 0.0, Cout)
         Cout = np.where((K[None, :] >= ke[:, -1:])[..., None], C[:, -1:, :], Cout)
@@ -546,11 +549,12 @@ def extend_spectra(E, frequency_hz, direction_deg, wind_speed, wind_direction_de
         Fm = _model_directional(keval, theta_to, ucalc, wdc, om, model, water, model_kw)
         Fm = np.where((wind_ok & (u > 0))[:, None, None], Fm, 0.0)
         Ft = (1.0 - w)[..., None] * Bs[:, None, :] * keval[..., None] ** -3 \
-            + w[..., None] * Fm                                       # (m, nc, nth)
+            + w[..., None] * Fm           # step 3: k^-3 bridge blended into the model
         Vt = Ft * width[..., None]
-        Vtot = Vres.copy()
-        Vtot[:, j0:, :] += Vt
-        F = Vtot / dK[None, :, None]
+        if spectra:
+            F = Vres.copy()
+            F[:, j0:, :] += Vt
+            F /= dK[None, :, None]
         # --- moments
         cos2 = np.cos(np.deg2rad(th[None, :] - wd[:, None])) ** 2 * dth[None, :]  # (m, nth)
         m0_res = np.einsum("mij,j->m", V, dth)
@@ -577,8 +581,11 @@ def extend_spectra(E, frequency_hz, direction_deg, wind_speed, wind_direction_de
         res["mss_crosswind_tail"][sl] = nanif(mss_t - up_t, full)
         res["seam_wavenumber"][sl] = ks
         res["inverse_wave_age"][sl] = nanif(om, full)
-        spec_out[sl] = np.where(full[:, None, None], F, np.nan)
-        curv_out[sl] = nanif(Kc[None, :] ** 3 * np.einsum("mkj,j->mk", F, dth), full[:, None])
+        if spectra:
+            spec_out[sl] = np.where(full[:, None, None], F, np.nan)
+            curv_out[sl] = nanif(Kc[None, :] ** 3 * np.einsum("mkj,j->mk", F, dth),
+                                 full[:, None])
+            del F
         if parts:
             part_arrays["resolved_spectrum"][sl] = nanif(Vres / dK[None, :, None],
                                                          spec_ok[:, None, None])
@@ -590,8 +597,9 @@ def extend_spectra(E, frequency_hz, direction_deg, wind_speed, wind_direction_de
             part_arrays["model_spectrum"][sl] = nanif(
                 _model_directional(kk, theta_to, ucalc, wdc, om, model, water, model_kw),
                 full[:, None, None])
-    out["spectrum"] = spec_out.reshape(batch + (nk, nth))
-    out["curvature"] = curv_out.reshape(batch + (nk,))
+    if spectra:
+        out["spectrum"] = spec_out.reshape(batch + (nk, nth))
+        out["curvature"] = curv_out.reshape(batch + (nk,))
     for key, v in res.items():
         out[key] = v.reshape(batch) if batch else v[0]
     if parts:
@@ -841,15 +849,13 @@ def wind_inputs(ds, spec, *, wind=None, wind_speed=None, wind_direction=None,
     units = dict(units or {})
     src = wind if wind is not None else ds
     prov = []
-    errors = []
 
     def role(r):
         try:
             return read_role(src, r, over, units.get(r))
         except ValueError as exc:
-            if r in over:
-                raise
-            errors.append(str(exc))
+            if r in over or not str(exc).startswith(f"no {r} variable"):
+                raise             # an override that fails, or unknown units: say so
             return None
 
     speed = direction = None
@@ -880,13 +886,18 @@ def wind_inputs(ds, spec, *, wind=None, wind_speed=None, wind_direction=None,
                 direction = (np.degrees(np.arctan2(-u, -v)) % 360.0).rename("wind_direction")
                 prov.append(f"wind direction from components {u.name!r}, {v.name!r} of "
                             f"the {source}")
-    for what, val, opt in (("wind speed", speed, "--wind-speed VALUE"),
-                           ("wind direction", direction, "--wind-direction DEGREES")):
+    from .ncio import ROLES
+    for what, val, role_name, opt in (
+            ("wind speed", speed, "wind_speed", "--wind-speed VALUE"),
+            ("wind direction", direction, "wind_direction", "--wind-direction DEGREES")):
         if val is None:
-            found = "; ".join(e for e in errors if what.split()[1] in e or "wind" in e)
-            raise ValueError(f"{what} is needed for the tail but was not found in the "
-                             f"{source} ({found.split('; ')[0] if found else 'no match'}); "
-                             f"give {opt} or --wind-file FILE")
+            r = ROLES[role_name]
+            raise ValueError(
+                f"{what} is needed for the tail but was not found in the {source}: searched "
+                f"standard_name {'/'.join(r.standard_names)}, names {', '.join(r.names)}, "
+                f"and eastward_wind/northward_wind components; variables there: "
+                f"{', '.join(map(str, src.variables)) or 'none'}; give {opt}, --wind-file "
+                f"FILE or --var {role_name}=NAME")
     speed = _align(speed, spec, "wind speed")
     direction = _align(direction, spec, "wind direction")
     smin = float(speed.min()) if speed.size else 0.0
@@ -943,7 +954,7 @@ def depth_input(ds, spec, depth=None, *, overrides=None, units=None):
     return da, f"depth from variable {da.name!r} of the input file (NaN read as deep water)"
 
 
-def chunk_plan(sizes, batch_dims, spectra_per_chunk=1000):
+def chunk_plan(sizes, batch_dims, spectra_per_chunk=1000, stored=None):
     """Dask chunks holding about ``spectra_per_chunk`` spectra, spectral axes whole.
 
     Parameters
@@ -954,6 +965,11 @@ def chunk_plan(sizes, batch_dims, spectra_per_chunk=1000):
         Dimensions along which spectra are stacked (outermost first).
     spectra_per_chunk : int
         Target number of spectra per chunk (>= 1).
+    stored : mapping, optional
+        Chunk sizes of the spectra in the file (HDF5 chunks, ``encoding["chunksizes"]``).
+        Reading a part of a compressed stored chunk decompresses all of it, so the plan
+        is aligned to them: whole stored chunks when that stays within 4 times the
+        target, multiples of them otherwise.
 
     Returns
     -------
@@ -964,6 +980,9 @@ def chunk_plan(sizes, batch_dims, spectra_per_chunk=1000):
     --------
     >>> chunk_plan({"time": 1000, "station": 10}, ["time", "station"], 1000)
     {'time': 100, 'station': 10}
+    >>> chunk_plan({"time": 1000, "station": 10}, ["time", "station"], 1000,
+    ...            stored={"time": 128, "station": 10})
+    {'time': 128, 'station': 10}
     """
     target = max(int(spectra_per_chunk), 1)
     out = {}
@@ -976,7 +995,35 @@ def chunk_plan(sizes, batch_dims, spectra_per_chunk=1000):
         else:
             out[d] = max(1, target // inner)
             inner *= out[d]
+    if stored:
+        aligned = {}
+        for d in batch_dims:
+            c = int(stored.get(d, 1) or 1)
+            n = int(sizes[d])
+            if out[d] >= n or c <= 1:
+                aligned[d] = out[d]
+            elif out[d] < c:
+                aligned[d] = min(c, n)
+            else:
+                aligned[d] = out[d] // c * c
+        if int(np.prod([aligned[d] for d in batch_dims])) <= 4 * target:
+            out = aligned
     return {d: out[d] for d in batch_dims}
+
+
+def splits_stored_chunks(plan, sizes, stored):
+    """True when the dask chunks of ``plan`` cut through stored (HDF5) chunks.
+
+    Examples
+    --------
+    >>> splits_stored_chunks({"time": 100}, {"time": 1000}, {"time": 500})
+    True
+    """
+    for d, n in plan.items():
+        c = int((stored or {}).get(d, 1) or 1)
+        if c > 1 and n < int(sizes[d]) and n % c:
+            return True
+    return False
 
 
 def extend_dataset(ds, *, overrides=None, units=None, direction_convention=None, wind=None,
@@ -1052,7 +1099,7 @@ def extend_dataset(ds, *, overrides=None, units=None, direction_convention=None,
     keys = list(OUTPUTS) if keep_spectra else list(OUTPUTS[2:])
 
     def block(E, U, WD, H):
-        r = extend_spectra(E, f, th, U, WD, H, **kw)
+        r = extend_spectra(E, f, th, U, WD, H, spectra=keep_spectra, **kw)
         return tuple(r[key] for key in keys)
 
     core_out = {"spectrum": ["wavenumber", ddim], "curvature": ["wavenumber"]}
@@ -1158,16 +1205,46 @@ def count_spectra(out):
             "extended": int(np.sum(np.isfinite(hs)))}
 
 
-def output_encoding(out, complevel=1):
-    """NetCDF encoding for :func:`extend_dataset` outputs: float32 spectra, light zlib,
-    no _FillValue on coordinates and bounds (CF: coordinates have no missing values)."""
+def output_encoding(out, complevel=0):
+    """NetCDF encoding for :func:`extend_dataset` outputs.
+
+    Parameters
+    ----------
+    out : xarray.Dataset
+    complevel : int
+        zlib level 0-9 of the (large) extended spectra; 0 (default) stores them
+        uncompressed, which is several times faster to write (single-precision spectra
+        compress by only about a third).  With compression, HDF5 chunks hold one spectrum
+        each, so dask chunks never split them.  Small variables always get zlib level 1.
+
+    Returns
+    -------
+    dict
+        For :func:`shortwave.ncio.write_netcdf`: float32 spectra; no ``_FillValue`` on
+        coordinates and bounds (CF 2.5.1: coordinates have no missing values).
+
+    Examples
+    --------
+    >>> from shortwave.synthetic import greyhaven_spectra
+    >>> enc = output_encoding(extend_dataset(greyhaven_spectra(1)), complevel=4)
+    >>> enc["directional_spectrum"]["chunksizes"]
+    (1, 1, 226, 36)
+    """
+    level = int(complevel)
+    if not 0 <= level <= 9:
+        raise ValueError(f"complevel: must be 0-9, got {complevel}")
     enc = {}
     for name, var in out.data_vars.items():
         if var.dtype.kind == "f":
-            enc[name] = {"zlib": complevel > 0, "complevel": int(complevel)}
+            enc[name] = {"zlib": True, "complevel": 1}
     if "directional_spectrum" in out:
-        enc["directional_spectrum"]["dtype"] = "float32"
-        enc["directional_spectrum"]["shuffle"] = True
+        var = out["directional_spectrum"]
+        spec = {"dtype": "float32", "zlib": level > 0, "complevel": level}
+        if level > 0:
+            spec.update(shuffle=True,
+                        chunksizes=tuple(1 if d not in ("wavenumber", var.dims[-1]) else n
+                                         for d, n in var.sizes.items()))
+        enc["directional_spectrum"] = spec
     for name in list(out.coords) + ["wavenumber_bounds"]:
         if name in out.variables and out[name].dtype.kind == "f":
             enc[name] = {**enc.get(name, {}), "_FillValue": None}
@@ -1185,7 +1262,8 @@ def _select_positions(ds, spec, batch_dims, select):
         key, val = key.strip(), val.strip().strip("'\"")
         if key in batch_dims:
             dim, coord = key, (ds.coords[key] if key in ds.coords else None)
-        elif key in ds.coords and ds.coords[key].ndim == 1 and ds.coords[key].dims[0] in batch_dims:
+        elif (key in ds.coords and ds.coords[key].ndim == 1
+              and ds.coords[key].dims[0] in batch_dims):
             dim, coord = ds.coords[key].dims[0], ds.coords[key]
         else:
             raise ValueError(f"selection {key}={val}: {key!r} is neither a dimension of the "
@@ -1243,7 +1321,8 @@ def spectrum_parts(ds, select=None, *, overrides=None, units=None, direction_con
     Returns
     -------
     dict
-        ``wavenumber`` [rad m-1]; curvature spectra B(k) [1] of the ``extended`` spectrum,
+        ``wavenumber`` and ``wavenumber_bounds`` [rad m-1]; curvature spectra B(k) [1] of
+        the ``extended`` spectrum,
         its ``resolved`` and ``tail`` parts and the pure ``model``; ``node_wavenumber``
         and ``node_curvature``: the resolved spectrum converted point by point at the
         frequency nodes (:func:`shortwave.spectrum.convert.frequency_to_wavenumber`);
@@ -1310,7 +1389,8 @@ def spectrum_parts(ds, select=None, *, overrides=None, units=None, direction_con
     Fn, kn = frequency_to_wavenumber(e, f, th, depth=h if np.isfinite(h) else np.inf,
                                      water=water)
     out = {key: r[key] for key in OUTPUTS[2:]}
-    out.update({"wavenumber": k, "extended": np.asarray(r["curvature"]),
+    out.update({"wavenumber": k, "wavenumber_bounds": r["wavenumber_bounds"],
+                "extended": np.asarray(r["curvature"]),
                 "resolved": curv(r["resolved_spectrum"]), "tail": curv(r["tail_spectrum"]),
                 "model": curv(r["model_spectrum"]), "node_wavenumber": np.asarray(kn),
                 "node_curvature": np.asarray(kn) ** 3 * np.asarray(

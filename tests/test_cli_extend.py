@@ -147,3 +147,23 @@ def test_help_mentions_units_and_roles(capsys):
         main(["extend", "--help"])
     text = capsys.readouterr().out
     assert "--wind-speed" in text and "ROLE=NAME" in text and "rad/m" in text
+
+
+def test_distributed_scheduler_address(spectra_file, tmp_path, capsys):
+    distributed = pytest.importorskip("distributed")
+    cluster = distributed.LocalCluster(n_workers=1, threads_per_worker=2, processes=False,
+                                       dashboard_address=":0")
+    try:
+        out = tmp_path / "dist.nc"
+        rc = main(["extend", str(spectra_file), "-o", str(out), "--scheduler",
+                   cluster.scheduler_address, "--chunk-spectra", "4"])
+    finally:
+        cluster.close()
+    assert rc == 0
+    ref = tmp_path / "local.nc"
+    assert main(["extend", str(spectra_file), "-o", str(ref), "--chunk-spectra", "0"]) == 0
+    a, b = xr.open_dataset(out), xr.open_dataset(ref)
+    np.testing.assert_allclose(a["mean_square_slope"].values, b["mean_square_slope"].values,
+                               rtol=1e-12)
+    a.close()
+    b.close()

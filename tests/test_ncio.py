@@ -205,12 +205,14 @@ def test_read_role_converts_and_unit_override():
 
 
 def test_register_role_extends_the_table():
+    name = "test_only_foam_fraction"
+    assert name not in ROLES
     try:
-        register_role("slick_mask", (), ("slick",), "1", "slick mask")
-        ds = xr.Dataset({"Slick": (("x",), [0.0, 1.0], {"units": "1"})})
-        assert read_role(ds, "slick_mask").name == "Slick"
+        register_role(name, (), ("foam",), "1", "foam fraction")
+        ds = xr.Dataset({"Foam": (("x",), [0.0, 1.0], {"units": "1"})})
+        assert read_role(ds, name).name == "Foam"
     finally:
-        ROLES.pop("slick_mask", None)
+        ROLES.pop(name, None)
 
 
 def test_parse_chunks():

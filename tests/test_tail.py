@@ -7,7 +7,7 @@ from shortwave.spectrum.convert import wavenumber_to_frequency
 from shortwave.spectrum.moments import frequency_mean_square_slope
 from shortwave.synthetic import (PM_ALPHA, PM_BETA, U195_OVER_U10, geometric_frequencies,
                                  jonswap, wave_spectra)
-from shortwave.tail import (K_MAX, extend_spectra, frequency_edges, transition_weight,
+from shortwave.tail import (K_MAX, TAIL_MODELS, extend_spectra, frequency_edges, transition_weight,
                             wavenumber_grid)
 
 F36 = geometric_frequencies()                    # 0.035-0.6 Hz, 36 frequencies
@@ -91,7 +91,7 @@ def test_true_bin_widths_of_a_geometric_grid_and_cf_bounds():
         extend_spectra(E, f, TH36, 8.0, 0.0, frequency_bounds=bad)
 
 
-# --- the seam ---------------------------------------------------------------------------------
+# --- the seam ----------------------------------------------------------------------------
 
 def _cell_curvature(r):
     return np.asarray(r["curvature"], float)
@@ -120,13 +120,22 @@ def test_curvature_is_continuous_at_the_seam_and_resolved_part_kept():
     assert above.sum() > 0
 
 
-def test_above_the_band_the_tail_is_the_model():
+@pytest.mark.parametrize("model", TAIL_MODELS)
+def test_above_the_band_the_tail_is_the_chosen_model(model):
+    from shortwave import spectrum
     E = wave_spectra(F36, TH36, 10.0, 200.0)
-    r = extend_spectra(E, F36, TH36, 10.0, 200.0, parts=True, transition_ratio=2.0)
+    r = extend_spectra(E, F36, TH36, 10.0, 200.0, parts=True, transition_ratio=2.0,
+                       model=model, points_per_decade=10)
     lo = r["wavenumber_bounds"][:, 0]
     far = lo >= 2.0 * r["seam_wavenumber"]
     assert np.allclose(np.asarray(r["spectrum"])[far], r["model_spectrum"][far], rtol=2e-6,
                        atol=0)
+    # and the model spectrum is the spectrum module's directional form, phi from downwind
+    k = r["wavenumber"][far][::5]
+    phi = np.mod(TH36 + 180.0 - (200.0 + 180.0), 360.0)     # wave "to" minus wind "to"
+    ref = spectrum.directional(k[:, None], phi[None, :], 10.0, model=model,
+                               inverse_wave_age=r["inverse_wave_age"])
+    assert np.allclose(r["model_spectrum"][far][::5], ref, rtol=1e-9)
 
 
 def test_transition_weight_shape():
@@ -136,7 +145,7 @@ def test_transition_weight_shape():
     assert transition_weight(2**0.5, 1.0, 2.0) == pytest.approx(0.5, abs=1e-12)
 
 
-# --- slopes against Cox & Munk ------------------------------------------------------------------
+# --- slopes against Cox & Munk -----------------------------------------------------------
 
 @pytest.mark.parametrize("u10", [5.0, 10.0, 14.0])
 def test_mss_of_extended_fully_developed_sea_within_cox_munk_scatter(u10):
@@ -181,7 +190,7 @@ def test_model_spectrum_fed_as_resolved_part_is_reproduced():
     assert r["mss_upwind"] == pytest.approx(up, rel=0.01)
 
 
-# --- directions -----------------------------------------------------------------------------------
+# --- directions --------------------------------------------------------------------------
 
 def test_from_to_and_unsorted_directions_leave_moments_unchanged():
     E = wave_spectra(F36, TH36, 9.0, 30.0, 50e3, swell_height=1.0, swell_from_deg=300.0)
@@ -204,7 +213,7 @@ def test_a_quarter_turn_of_the_wind_swaps_the_slope_components():
     assert a["mss_upwind_resolved"] > 1.5 * a["mss_crosswind_resolved"]
 
 
-# --- batches, NaN, bad input -----------------------------------------------------------------------
+# --- batches, NaN, bad input -------------------------------------------------------------
 
 def test_batch_equals_one_by_one_across_blocks():
     u = np.array([[6.0, 9.0, 12.0], [15.0, 7.5, 4.0]])

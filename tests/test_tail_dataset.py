@@ -1,7 +1,6 @@
 """Tail grafting on NetCDF/xarray datasets: layouts, conventions, wind sources, errors, dask."""
 import numpy as np
 import pytest
-import xarray as xr
 
 from shortwave.ncio import open_input, write_netcdf
 from shortwave.synthetic import (greyhaven_spectra, greyhaven_spectra_grid, netcdf_encoding)

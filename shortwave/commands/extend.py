@@ -109,6 +109,8 @@ def add_arguments(parser):
                       "the highest frequency")
     tail.add_argument("--moments-only", action="store_true",
                       help="write only Hs and slopes, not the spectra")
+    tail.add_argument("--compress", type=int, default=0, choices=range(10), metavar="0-9",
+                      help="zlib level for the extended spectra (0: none, fastest)")
     run = parser.add_argument_group("large files")
     run.add_argument("--chunk-spectra", type=int, default=1000, metavar="N",
                      help="spectra per dask chunk (memory stays bounded by the chunk); "
@@ -198,7 +200,7 @@ def _compute_with_progress(show):
 def run(args):
     from .. import ncio
     from ..tail import (chunk_plan, count_spectra, extend_dataset, output_encoding,
-                        prepare_inputs, spectrum_parts)
+                        prepare_inputs, spectrum_parts, splits_stored_chunks)
 
     inputs = [args.input] + ([args.wind_file] if args.wind_file else [])
     for src in inputs:       # refuse before any work
@@ -235,7 +237,17 @@ def run(args):
                     inp = prepare_inputs(ds, overrides=overrides, units=units,
                                          direction_convention=args.direction_convention)
                     spec_dims = [inp["frequency_dim"], inp["direction_dim"]]
-                    plan = chunk_plan(ds.sizes, inp["batch_dims"], args.chunk_spectra)
+                    var = ds[inp["name"]]
+                    stored = dict(zip(var.dims, var.encoding.get("chunksizes") or ()))
+                    plan = chunk_plan(ds.sizes, inp["batch_dims"], args.chunk_spectra,
+                                      stored)
+                    if splits_stored_chunks(plan, ds.sizes, stored):
+                        warnings.warn(
+                            f"the file stores {inp['name']!r} in chunks of "
+                            f"{tuple(var.encoding['chunksizes'])} along {var.dims}, larger "
+                            f"than {args.chunk_spectra} spectra: each is read (and "
+                            "decompressed) several times, which is slow; raise "
+                            "--chunk-spectra or rewrite the file with smaller chunks")
                     plan.update({d: -1 for d in spec_dims})
                     ds = ds.chunk({d: n for d, n in plan.items() if d in ds.dims})
                     if wind_ds is not None:
@@ -256,7 +268,7 @@ def run(args):
                     parts = spectrum_parts(ds, args.plot_at, **options)
                 show = args.progress if args.progress is not None else sys.stderr.isatty()
                 ncio.write_netcdf(out, args.output, inputs=inputs, overwrite=args.overwrite,
-                                  encoding=output_encoding(out),
+                                  encoding=output_encoding(out, args.compress),
                                   compute=_compute_with_progress(show and have_dask
                                                                  and client is None))
         finally:
@@ -275,6 +287,10 @@ def run(args):
         table = summary_table(written)
     finally:
         written.close()
+    png = None
+    if args.plot:
+        from ..plots.tail import tail_figure
+        png = tail_figure(parts, args.plot)
     head = (f"{counts['spectra']} spectra from {args.input}: {counts['extended']} extended, "
             f"{counts['nan_spectra']} NaN spectra (kept NaN), {counts['no_wind']} without "
             f"wind (tail NaN); wrote {args.output}")
@@ -286,8 +302,6 @@ def run(args):
         print(format_table(table, fmt="csv"))
     else:
         print(format_table(table, fmt="text", title=head + "\n"))
-    if args.plot:
-        from ..plots.tail import tail_figure
-        path = tail_figure(parts, args.plot)
-        print(f"wrote {path}", file=sys.stderr if args.format != "text" else sys.stdout)
+    if png:
+        print(f"wrote {png}", file=sys.stderr if args.format != "text" else sys.stdout)
     return 0

@@ -28,6 +28,9 @@ def save_figure(fig, path, dpi=120):
     os.close(fd)
     try:
         fig.savefig(tmp, dpi=dpi, bbox_inches="tight", format="png")
+        mask = os.umask(0o022)
+        os.umask(mask)
+        os.chmod(tmp, 0o666 & ~mask)  # mkstemp makes 0600; give the usual permissions
         os.replace(tmp, path)
     finally:
         plt.close(fig)

@@ -48,7 +48,14 @@ def tail_figure(parts, path, *, title=None):
     k = np.asarray(parts["wavenumber"], dtype=float)
     ks = float(parts["seam_wavenumber"])
     ratio = float(parts["transition_ratio"])
-    fig, ax = new_figure(figsize=(8.0, 5.0))
+    fig, ax = new_figure(figsize=(10.5, 5.0))
+    bounds = parts.get("wavenumber_bounds")
+    if bounds is not None:       # the cell holding the seam is shared: show it in the sum
+        below = np.asarray(bounds)[:, 1] <= ks * (1 + 1e-12)
+        above = np.asarray(bounds)[:, 0] >= ks * (1 - 1e-12)
+    else:
+        below = k <= ks
+        above = k >= ks
 
     def pos(y):
         y = np.asarray(y, dtype=float)
@@ -59,13 +66,14 @@ def tail_figure(parts, path, *, title=None):
     ax.axvline(ks, color="0.45", lw=1.0, ls=":", zorder=1)
     ax.plot(k, pos(parts["model"]), color="0.55", lw=1.2, ls="--",
             label=f"model alone ({parts.get('model_name', 'model')})")
-    ax.plot(k, pos(parts["resolved"]), color="tab:blue", lw=1.6,
-            label="wave-model part (per wavenumber cell)")
+    ax.plot(k, pos(np.where(below, parts["resolved"], np.nan)), color="tab:blue", lw=1.6,
+            zorder=3, label="wave-model part (per wavenumber cell)")
     ax.plot(parts["node_wavenumber"], pos(parts["node_curvature"]), "o", ms=3.0,
             color="tab:blue", alpha=0.7, label="wave-model part at its frequencies")
-    ax.plot(k, pos(parts["tail"]), color="tab:orange", lw=1.6, label="tail")
-    ax.plot(k, pos(parts["extended"]), color="k", lw=2.2, alpha=0.8,
-            label="extended spectrum")
+    ax.plot(k, pos(np.where(above, parts["tail"], np.nan)), color="tab:orange", lw=1.6,
+            zorder=3, label="tail")
+    ax.plot(k, pos(parts["extended"]), color="k", lw=4.5, alpha=0.25, zorder=2,
+            label="extended spectrum (sum)")
     ax.set_xscale("log")
     ax.set_yscale("log")
     ymax = np.nanmax(pos(parts["extended"]))
@@ -82,9 +90,9 @@ def tail_figure(parts, path, *, title=None):
             f" = {parts['mss']:.4f}\n"
             f"along / across wind: {parts['mss_upwind']:.4f} / {parts['mss_crosswind']:.4f}\n"
             f"seam k_s = {ks:.3g} rad/m")
-    ax.text(0.02, 0.03, text, transform=ax.transAxes, fontsize=8.5, va="bottom",
+    ax.text(1.02, 0.0, text, transform=ax.transAxes, fontsize=8.5, va="bottom",
             bbox={"facecolor": "white", "alpha": 0.85, "edgecolor": "0.7"})
-    ax.legend(loc="upper left", fontsize=8, framealpha=0.9)
+    ax.legend(loc="upper left", bbox_to_anchor=(1.02, 1.0), fontsize=8, framealpha=0.9)
     ax.set_title(title or f"Extended spectrum: {parts['label']}", fontsize=10)
     ax.grid(True, which="major", alpha=0.3)
     return save_figure(fig, path)
