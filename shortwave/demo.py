@@ -45,6 +45,13 @@ def write_text_atomic(text, path):
 
     An interrupted write leaves no partial file; the file gets the usual permissions
     (0666 less the umask).
+
+    Examples
+    --------
+    >>> import os, tempfile
+    >>> path = write_text_atomic("one line", os.path.join(tempfile.mkdtemp(), "t.txt"))
+    >>> open(path).read().splitlines()
+    ['one line']
     """
     import tempfile
     path = os.fspath(path)
@@ -289,7 +296,13 @@ STEPS = (("ripples", step_ripples), ("spectra", step_spectra), ("bragg", step_br
 
 
 def demo_steps():
-    """Names of the demo steps, in the order they run."""
+    """Names of the demo steps, in the order they run.
+
+    Examples
+    --------
+    >>> demo_steps()[:3]
+    ['ripples', 'spectra', 'bragg']
+    """
     return [name for name, _ in STEPS]
 
 
@@ -332,6 +345,13 @@ def run_demo(folder="shortwave-demo", *, small=False, on_step=None, steps=None):
         The folder cannot be created or written.
     RuntimeError
         A step failed (the message names the command and its error).
+
+    Examples
+    --------
+    >>> import tempfile
+    >>> made = run_demo(tempfile.mkdtemp(), small=True, steps=["bragg"])
+    >>> [os.path.basename(p.path) for p in made]
+    ['bragg.csv', 'bragg.png', 'README.txt']
     """
     folder = os.path.abspath(os.fspath(folder))
     if os.path.exists(folder) and not os.path.isdir(folder):

@@ -52,6 +52,7 @@ from . import ncio
 from ._checks import ShortwaveInputError, check_choice
 
 __all__ = ["Scene", "open_scene", "scene_products", "process_scene", "scene_summary",
+           "scan_scene", "start_local_cluster",
            "FILM_COVERS", "CONTRAST_MODELS", "FIELD_METADATA", "FREQUENCY_RANGE_HZ",
            "swath_incidence_field", "SCENE_ROLES"]
 
@@ -267,7 +268,7 @@ def swath_incidence_field(template, near_deg, far_deg, across_dim=None):
     >>> import xarray as xr
     >>> t = xr.DataArray(np.zeros((2, 3)), dims=("y", "x"))
     >>> [round(float(v), 1) for v in swath_incidence_field(t, 20.0, 45.0).values]
-    [20.0, 34.1, 45.0]
+    [20.0, 34.3, 45.0]
     """
     import xarray as xr
     from .scene_synthetic import swath_incidence
@@ -543,10 +544,76 @@ class ScanResult:
     stats: dict
 
 
+_INPUT_KEYS = ("wind_speed", "wind_azimuth", "incidence_angle", "temperature_c", "salinity",
+               "slick_mask", "film_thickness")
+
+
+def _aligned_inputs(scene):
+    """Inputs broadcast to the scene grid, in one dimension order; dask chunks shared.
+
+    Returns ``(keys, arrays)``: DataArrays that are all NumPy-backed or all dask-backed
+    with identical chunks (so that per-chunk work sees matching blocks).
+    """
+    import xarray as xr
+    ins = scene.inputs
+    keys = [k for k in _INPUT_KEYS if k in ins]
+    arrays = list(xr.broadcast(*[ins[k] for k in keys]))
+    dims = arrays[0].dims
+    arrays = [a if a.dims == dims else a.transpose(*dims) for a in arrays]
+    lazy = [a for a in arrays if _is_dask(a.data)]
+    if lazy:
+        ref = dict(zip(lazy[0].dims, lazy[0].chunks))
+        arrays = [a if (_is_dask(a.data) and dict(zip(a.dims, a.chunks)) == ref)
+                  else a.chunk(ref) for a in arrays]
+    return keys, arrays
+
+
+def _block_stats(keys, min_wind, *blocks):
+    """Statistics of one block of the inputs: per input min, max, inf and finite counts,
+    and the counts of missing, calm and film cells (a flat float array)."""
+    arrs = dict(zip(keys, (np.asarray(b, dtype=float) for b in blocks)))
+    out = []
+    valid = np.ones(arrs["wind_speed"].shape, bool)
+    for k in ("wind_speed", "wind_azimuth", "incidence_angle", "temperature_c", "salinity"):
+        if k in arrs:
+            valid &= np.isfinite(arrs[k])
+    calm = valid & (arrs["wind_speed"] < min_wind)
+    film = np.zeros(valid.shape, bool)
+    if "slick_mask" in arrs:
+        film |= arrs["slick_mask"] > 0.5
+        if "film_thickness" in arrs:
+            film &= ~(arrs["film_thickness"] <= 0)
+    elif "film_thickness" in arrs:
+        film |= arrs["film_thickness"] > 0
+    film &= valid & ~calm
+    out += [float((~valid).sum()), float(calm.sum()), float(film.sum())]
+    for k in keys:
+        v = arrs[k]
+        fin = np.isfinite(v)
+        out += [float(v[fin].min()) if fin.any() else np.nan,
+                float(v[fin].max()) if fin.any() else np.nan,
+                float(np.isinf(v).sum()), float(fin.sum())]
+    return np.array(out)
+
+
+def _combine_stats(keys, rows):
+    rows = np.atleast_2d(np.asarray(rows, dtype=float))
+    got = {"missing": rows[:, 0].sum(), "calm": rows[:, 1].sum(), "film": rows[:, 2].sum()}
+    for i, k in enumerate(keys):
+        c = 3 + 4 * i
+        mins, maxs = rows[:, c], rows[:, c + 1]
+        got[f"{k}.min"] = float(np.nanmin(mins)) if np.isfinite(mins).any() else np.nan
+        got[f"{k}.max"] = float(np.nanmax(maxs)) if np.isfinite(maxs).any() else np.nan
+        got[f"{k}.inf"] = rows[:, c + 2].sum()
+        got[f"{k}.finite"] = rows[:, c + 3].sum()
+    return got
+
+
 def scan_scene(scene, min_wind_speed=0.5):
     """Check every input's values and count missing, calm and film cells.
 
-    One pass over the inputs (a single ``dask.compute`` when they are lazy).  Raises a
+    One pass over the inputs: block by block when they are dask arrays (one small task
+    per chunk, a single ``dask.compute``).  Raises a
     :class:`~shortwave._checks.ShortwaveInputError` naming the input variable for infinite
     values, negative wind, incidence outside (0, 90) degree, implausible temperature or
     salinity (often a unit mix-up), mask values other than 0/1 and negative thickness.
@@ -554,50 +621,28 @@ def scan_scene(scene, min_wind_speed=0.5):
     Returns
     -------
     ScanResult
+        ``cells``, ``missing`` (NaN in a needed input: land), ``calm`` (wind below
+        ``min_wind_speed`` [m s-1]), ``film_cells`` and per-input statistics.
+
+    Examples
+    --------
+    >>> from shortwave.scene_synthetic import greyhaven_scene
+    >>> scan = scan_scene(open_scene(greyhaven_scene((6, 8))))
+    >>> scan.cells, scan.missing
+    (48, 14)
     """
-    import xarray as xr
-    ins = scene.inputs
-    wind, inc = xr.broadcast(ins["wind_speed"], ins["incidence_angle"])
-    need = [ins["wind_speed"], ins["wind_azimuth"], ins["incidence_angle"]]
-    for key in ("temperature_c", "salinity"):
-        if key in ins:
-            need.append(ins[key])
-    valid = xr.ones_like(wind, dtype=bool)
-    for da in need:
-        valid = valid & np.isfinite(da)
-    calm = valid & (wind < min_wind_speed)
-    film = None
-    if scene.has_film_field:
-        film = xr.zeros_like(wind, dtype=bool)
-        if "slick_mask" in ins:
-            film = film | (ins["slick_mask"] > 0.5)
-        if "film_thickness" in ins:
-            film = (film | (ins["film_thickness"] > 0)) if "slick_mask" not in ins else \
-                film & ~(ins["film_thickness"] <= 0)
-        film = film & valid & ~calm
-    todo = {"missing": (~valid).sum(), "calm": calm.sum()}
-    if film is not None:
-        todo["film"] = film.sum()
-    for key, da in ins.data_vars.items():
-        if da.ndim == 0 and not _is_dask(da.data):
-            vals = np.asarray(da.values, dtype=float)
-            todo[f"{key}.min"] = vals
-            todo[f"{key}.max"] = vals
-            todo[f"{key}.inf"] = np.isinf(vals).astype(int)
-            todo[f"{key}.finite"] = np.isfinite(vals).astype(int)
-            continue
-        fin = da.where(np.isfinite(da))
-        todo[f"{key}.min"] = fin.min()
-        todo[f"{key}.max"] = fin.max()
-        todo[f"{key}.inf"] = np.isinf(da).sum()
-        todo[f"{key}.finite"] = np.isfinite(da).sum()
-    keys = list(todo)
-    vals = [v.data if hasattr(v, "data") else v for v in todo.values()]
-    if any(_is_dask(v) for v in vals):
+    keys, arrays = _aligned_inputs(scene)
+    if _is_dask(arrays[0].data):
         import dask
-        vals = dask.compute(*vals)
-    got = {k: float(np.asarray(v)) for k, v in zip(keys, vals)}
-    for key in ins.data_vars:
+        darrs = [a.data for a in arrays]
+        tasks = [dask.delayed(_block_stats)(keys, min_wind_speed,
+                                            *[d.blocks[idx] for d in darrs])
+                 for idx in np.ndindex(*darrs[0].numblocks)]
+        rows = dask.compute(*tasks)
+    else:
+        rows = [_block_stats(keys, min_wind_speed, *[a.values for a in arrays])]
+    got = _combine_stats(keys, rows)
+    for key in keys:
         src = _source_name(scene, key)
         if got[f"{key}.inf"] > 0:
             raise ShortwaveInputError(f"{src}: infinite values are not allowed "
@@ -672,6 +717,43 @@ def _wind_lattice(u, step):
     return np.arange(lo, hi + 1) * step
 
 
+_CACHE = {}
+_CACHE_LIMIT = 64
+
+
+def _cache_for(key):
+    """A process-level memo (per worker process under dask.distributed) for tables that
+    every chunk would otherwise recompute: they depend on the film, the water, the model
+    and a wind node, never on the cells."""
+    if key not in _CACHE:
+        if len(_CACHE) >= _CACHE_LIMIT:
+            _CACHE.pop(next(iter(_CACHE)))
+        _CACHE[key] = {}
+    return _CACHE[key]
+
+
+def _film_key(film):
+    fields_ = [f.name for f in __import__("dataclasses").fields(film)
+               if f.name not in ("name", "source", "ranges")]
+    return (type(film).__name__, film.name) + tuple(
+        float(np.asarray(getattr(film, f))) for f in fields_)
+
+
+def _water_key(water):
+    return (float(water.temperature_c), float(water.salinity)) if water is not None else None
+
+
+def _node_table(key, grid, step, compute):
+    """Values at lattice nodes ``grid`` (multiples of ``step``), computing only new ones."""
+    memo = _cache_for(key)
+    ids = np.rint(np.asarray(grid) / step).astype(np.int64)
+    todo = [i for i in ids.tolist() if i not in memo]
+    if todo:
+        vals = np.asarray(compute(np.array(todo, dtype=float) * step), dtype=float)
+        memo.update(zip(todo, vals.tolist()))
+    return np.array([memo[i] for i in ids.tolist()])
+
+
 def _film_factor(film, water):
     """Spectrum factor 1 / y(k) of a film for :func:`shortwave.radar.nrcs` (memoised).
 
@@ -679,7 +761,7 @@ def _film_factor(film, water):
     relation: thick viscous oil, very short waves) the factor is 0: the film suppresses
     those waves entirely.
     """
-    memo = {}
+    memo = _cache_for(("film factor", _film_key(film), _water_key(water)))
 
     def factor(k):
         key = (k.shape, float(k.flat[0]), float(k.flat[-1]))
@@ -789,8 +871,9 @@ class _Kernel:
                                         permittivity=eps), dtype=float)
             res["sigma0"][idx] = sig
             grid = _wind_lattice(uu, MSS_WIND_STEP)
-            mss = np.asarray(spectrum.mean_square_slope(grid, model=self.spectrum_model,
-                                                        n=_MSS_POINTS))
+            mss = _node_table(("mss", self.spectrum_model), grid, MSS_WIND_STEP,
+                              lambda w: spectrum.mean_square_slope(
+                                  w, model=self.spectrum_model, n=_MSS_POINTS))
             res["mean_square_slope"][idx] = np.interp(uu, grid, mss)
             if self.film is not None:
                 self._film(res, idx, flat, kb, uu, ii, aa, tt, ss, eps, sig, Water)
@@ -847,7 +930,10 @@ class _Kernel:
                         permittivity=eps[c],
                         spectrum_factor=_film_factor(film_c, self.water))
                 grid = _wind_lattice(uu[c], MSS_SLICK_WIND_STEP)
-                m = _damped_mss(grid, film_c, mss_model, self.water, self.spectrum_model)
+                m = _node_table(("mss film", _film_key(film_c), _water_key(self.water),
+                                 mss_model, self.spectrum_model), grid, MSS_SLICK_WIND_STEP,
+                                lambda w, f=film_c: _damped_mss(w, f, mss_model, self.water,
+                                                                self.spectrum_model))
                 mss_s[c] = np.interp(uu[c], grid, m)
         res["sigma0_slick"][idx] = slick_sig
         res["damping_ratio"][idx] = np.where(on, ratio, np.nan)
@@ -921,8 +1007,8 @@ def scene_products(scene, frequency_hz, polarization="VV", film=None, *, cover="
     >>> from shortwave.scene_synthetic import greyhaven_scene
     >>> scene = open_scene(greyhaven_scene((6, 8)))
     >>> out = scene_products(scene, 5.405e9, "VV")
-    >>> round(float(out.bragg_wavelength.min()), 3)
-    0.081
+    >>> round(float(out.bragg_wavelength.min()), 4)   # C band at 45 degrees [m]
+    0.0392
     """
     import xarray as xr
     from . import __version__, radar
@@ -963,21 +1049,10 @@ def scene_products(scene, frequency_hz, polarization="VV", film=None, *, cover="
         scan = scan_scene(scene, mw)
     water = _mean_water(scene, scan)
     ins = scene.inputs
-    keys = [k for k in ("wind_speed", "wind_azimuth", "incidence_angle", "temperature_c",
-                        "salinity", "slick_mask", "film_thickness") if k in ins]
-    arrays = list(xr.broadcast(*[ins[k] for k in keys]))
-    dims = arrays[0].dims
-    arrays = [a.transpose(*dims) for a in arrays]
+    keys, arrays = _aligned_inputs(scene)
     kernel = _Kernel(f, pol, model, spectrum_model, film, contrast_model, cover, mw,
                      water, keys, thickness_classes_per_decade)
     names = kernel.outputs
-    lazy = any(_is_dask(a.data) for a in arrays)
-    if lazy:
-        import dask.array as dska
-        ref = next(a for a in arrays if _is_dask(a.data))
-        arrays = [a if _is_dask(a.data) else a.chunk(dict(zip(ref.dims, ref.chunks)))
-                  for a in arrays]
-        del dska
     outs = xr.apply_ufunc(kernel, *arrays, output_core_dims=[[] for _ in names],
                           dask="parallelized", output_dtypes=[float] * len(names),
                           keep_attrs=False)
@@ -1034,6 +1109,10 @@ def scene_products(scene, frequency_hz, polarization="VV", film=None, *, cover="
              if k not in ("Conventions", "history", "_NCProperties")}
     if "history" in scene.attrs:
         attrs["history"] = scene.attrs["history"]
+    if "source" in scene.attrs:
+        attrs["input_source"] = scene.attrs["source"]
+    if scene.path:
+        attrs["input_file"] = os.path.basename(scene.path)
     band = radar.band_of(f)
     attrs.update({
         "title": (f"{scene.attrs['title']}: radar products" if scene.attrs.get("title")
@@ -1089,7 +1168,14 @@ def _film_text(film):
 def scene_summary(products):
     """Short dict of what a products dataset holds (cell counts, ranges), for reports.
 
-    Computes only small reductions (min / max / NaN count of a few variables).
+    Computes only small reductions (min / max of a few variables).
+
+    Examples
+    --------
+    >>> from shortwave.scene_synthetic import greyhaven_scene
+    >>> out = scene_products(open_scene(greyhaven_scene((6, 8))), 5.405e9)
+    >>> scene_summary(out)["cells_missing"]
+    14
     """
     out = {k: products.attrs.get(k) for k in ("cells_total", "cells_missing", "cells_calm",
                                               "cells_film") if k in products.attrs}
@@ -1127,6 +1213,18 @@ def process_scene(source, output, *, frequency_hz, polarization="VV", film=None,
     -------
     (str, xarray.Dataset, ScanResult)
         The path written, the (lazy) products, and the input counts.
+
+    Examples
+    --------
+    >>> import os, tempfile
+    >>> from shortwave.scene_synthetic import greyhaven_scene
+    >>> folder = tempfile.mkdtemp()
+    >>> src = os.path.join(folder, "scene.nc")
+    >>> greyhaven_scene((6, 8)).to_netcdf(src)
+    >>> path, out, scan = process_scene(src, os.path.join(folder, "out.nc"),
+    ...                                 frequency_hz=5.405e9, film="natural")
+    >>> out.sigma0.attrs["standard_name"]
+    'surface_backwards_scattering_coefficient_of_radar_wave'
     """
     scene = open_scene(source, overrides=overrides, chunks=chunks, swath=swath,
                        across_dim=across_dim, look_azimuth=look_azimuth,
@@ -1139,8 +1237,64 @@ def process_scene(source, output, *, frequency_hz, polarization="VV", film=None,
                               spectrum_model=spectrum_model, min_wind_speed=min_wind_speed,
                               scan=scan)
     path = ncio.write_netcdf(products, output, inputs=inputs, overwrite=overwrite,
-                             command=command, compute=compute)
+                             command=command, compute=compute,
+                             encoding=_chunk_encoding(products))
     return path, products, scan
+
+
+def _chunk_encoding(ds):
+    """NetCDF chunk sizes equal to the dask chunks of each lazy variable.
+
+    Each dask chunk then fills whole compressed HDF5 chunks, so writing it needs no
+    read-modify-write of chunks shared with other tasks (much faster under
+    dask.distributed, and less memory).
+    """
+    enc = {}
+    for name, var in ds.data_vars.items():
+        if var.ndim and _is_dask(var.data):
+            enc[name] = {"chunksizes": tuple(int(c[0]) for c in var.chunks)}
+    return enc
+
+
+def start_local_cluster(n_workers, threads_per_worker=1):
+    """Start a local ``dask.distributed`` cluster suited to scene work; return (client, cluster).
+
+    Worker processes are started without the ``MALLOC_TRIM_THRESHOLD_`` environment
+    variable that ``distributed`` sets by default: with it, glibc returns every freed
+    block to the system at once, and this NumPy-heavy per-cell code runs 2 to 3 times
+    slower (measured with :file:`benchmarks/bench_scene.py`).
+
+    Parameters
+    ----------
+    n_workers : int
+        Worker processes, >= 1.
+    threads_per_worker : int
+        Threads per worker.
+
+    Returns
+    -------
+    (dask.distributed.Client, dask.distributed.LocalCluster)
+        Close both when done.
+
+    Examples
+    --------
+    >>> client, cluster = start_local_cluster(2)        # doctest: +SKIP
+    >>> client.close(); cluster.close()                  # doctest: +SKIP
+    """
+    import logging
+
+    import dask.config
+    from dask.distributed import Client, LocalCluster
+    n = int(n_workers)
+    if n < 1:
+        raise ShortwaveInputError(f"n_workers: need at least 1 worker, got {n_workers}")
+    env = dict(dask.config.get("distributed.nanny.pre-spawn-environ", {}) or {})
+    env.pop("MALLOC_TRIM_THRESHOLD_", None)
+    with dask.config.set({"distributed.nanny.pre-spawn-environ": env}):
+        cluster = LocalCluster(n_workers=n, threads_per_worker=int(threads_per_worker),
+                               processes=True, dashboard_address=":0",
+                               silence_logs=logging.ERROR)
+    return Client(cluster), cluster
 
 
 def _check_output(output, inputs, overwrite):

@@ -63,7 +63,7 @@ def swath_incidence(n_across, near_deg=20.0, far_deg=45.0):
     Examples
     --------
     >>> [round(float(a), 1) for a in swath_incidence(3, 20.0, 45.0)]
-    [20.0, 34.1, 45.0]
+    [20.0, 34.3, 45.0]
     """
     from ._checks import ShortwaveInputError, check_range
     if int(n_across) < 2:

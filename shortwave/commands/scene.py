@@ -123,7 +123,8 @@ def add_arguments(parser):
                       default=None, metavar="N/M", help="oil-water interfacial tension [N/m]")
     run_ = parser.add_argument_group("running")
     run_.add_argument("--chunks", default=None, metavar="DIM:N,...|auto",
-                      help="read in dask chunks and compute lazily (large files)")
+                      help="read in dask chunks and compute lazily (default: auto for "
+                      "inputs above 2 million cells, else all at once)")
     run_.add_argument("--scheduler", default=None, metavar="ADDRESS",
                       help="dask.distributed scheduler address (tcp://host:8786), or "
                       "local:N to start a local cluster of N worker processes; implies "
@@ -149,9 +150,26 @@ def _film(args):
     return build_film(args)
 
 
+LAZY_CELLS = 2_000_000
+"""Scenes with more cells than this are read in dask chunks even without --chunks (when
+dask is installed), so that memory stays bounded and progress can be shown."""
+
+
+def _auto_chunks(path):
+    """``"auto"`` for large inputs (more than :data:`LAZY_CELLS` cells) when dask is there."""
+    try:
+        import dask  # noqa: F401
+    except ImportError:
+        return None
+    from ..ncio import open_input
+    with open_input(path) as ds:
+        cells = max((int(v.size) for v in ds.data_vars.values()), default=0)
+    return "auto" if cells > LAZY_CELLS else None
+
+
 def _client(address):
     try:
-        from dask.distributed import Client, LocalCluster
+        from dask.distributed import Client
     except ImportError:
         raise ValueError("--scheduler needs dask.distributed, which is not installed "
                          "(pip install 'shortwave[dask]')") from None
@@ -163,9 +181,8 @@ def _client(address):
         except ValueError:
             raise ValueError(f"--scheduler {address}: expected local:N with N >= 1") \
                 from None
-        cluster = LocalCluster(n_workers=n, threads_per_worker=1, processes=True,
-                               dashboard_address=None)
-        return Client(cluster), cluster
+        from ..fields import start_local_cluster
+        return start_local_cluster(n)
     try:
         return Client(address, timeout="10s"), None
     except (OSError, TimeoutError) as exc:
@@ -178,8 +195,10 @@ def _computer(progress, client):
         def compute(delayed):
             fut = client.compute(delayed)
             if progress:
+                import contextlib
                 from dask.distributed import progress as dprogress
-                dprogress(fut, notebook=False)
+                with contextlib.redirect_stdout(sys.stderr):   # the bar goes to stderr
+                    dprogress(fut, notebook=False)
                 print(file=sys.stderr)
             return fut.result()
         return compute
@@ -208,6 +227,8 @@ def run(args):
             raise OSError(f"--plot: folder {pfolder} does not exist")
         if ncio.same_file(args.plot, args.input):
             raise ValueError("--plot: the figure path is the input file")
+    if chunks is None and not args.scheduler:
+        chunks = _auto_chunks(args.input)
     client = cluster = None
     if args.scheduler:
         chunks = chunks or "auto"
@@ -251,7 +272,12 @@ def run(args):
                              f"{elapsed:.1f} s"))
     if film is not None:
         from ..slick import CAUTION
-        print(f"film: {film.name}; {CAUTION}")
+        where = ("on the slick mask / film thickness of the input"
+                 if products.attrs.get("film_cover") == "mask"
+                 else "over every sea cell (what-if)")
+        print(f"film: {film.name}, {where}, {products.attrs.get('cells_film')} cells, "
+              f"contrast model {products.attrs.get('contrast_model')}")
+        print(CAUTION)
     print(f"wrote {path}")
     if args.plot:
         print(f"wrote {_plot(path, args.plot)}")

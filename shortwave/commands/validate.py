@@ -43,6 +43,32 @@ def results_table(results, reasons=False):
     return cols
 
 
+def _num(v):
+    try:
+        return f"{float(v):.6g}"
+    except (TypeError, ValueError):
+        return str(v)
+
+
+def text_report(results):
+    """The results for people: grouped by topic, three lines per comparison."""
+    lines = []
+    topic = None
+    for r in results:
+        c = r.check
+        if c.topic != topic:
+            topic = c.topic
+            lines += ["", f"== {topic} =="]
+        row = r.row()
+        lines.append(f"{row['result'].upper():5s} {c.id}")
+        lines.append(f"      {c.quantity}: model {_num(r.model)}, reference "
+                     f"{_num(c.reference)} {c.unit} ({row['tolerance']})")
+        lines.append(f"      source: {c.source}")
+        if r.error:
+            lines.append(f"      error: {r.error}")
+    return "\n".join(lines)
+
+
 def run(args):
     from ..validation import all_checks, evaluate
     checks = all_checks()
@@ -65,8 +91,11 @@ def run(args):
     n_fail = sum(not r.passed for r in results)
     title = (f"{len(results)} comparisons with published references: "
              f"{len(results) - n_fail} pass, {n_fail} fail")
-    print(format_table(results_table(shown), fmt=args.format, digits=5,
-                       title=title if args.format == "text" else None))
+    if args.format == "text":
+        print(title)
+        print(text_report(shown))
+    else:
+        print(format_table(results_table(shown), fmt=args.format, digits=5))
     if args.csv and args.format == "text":
         print(f"wrote {args.csv}")
     return 1 if n_fail else 0

@@ -29,7 +29,13 @@ def _coords(da):
 
 
 def units_label(units):
-    """Units for people: the UDUNITS decibel ``0.1 lg(re 1)`` shows as ``dB``."""
+    """Units for people: the UDUNITS decibel ``0.1 lg(re 1)`` shows as ``dB``.
+
+    Examples
+    --------
+    >>> units_label("0.1 lg(re 1)"), units_label("m s-1")
+    ('dB', 'm s-1')
+    """
     u = str(units or "").strip()
     return "dB" if u.replace(" ", "") in ("0.1lg(re1)", "lg(re1)/10") else u
 
@@ -45,7 +51,7 @@ def _draw(ax, da, *, cmap="viridis", vmin=None, vmax=None, title=None, land=None
     ax.set_ylabel(yl)
     ax.set_aspect("equal")
     units = units_label(da.attrs.get("units", ""))
-    name = title or da.attrs.get("long_name", da.name)
+    name = str(title or da.attrs.get("long_name") or da.name or "")
     ax.set_title(name if len(name) < 60 else name[:57] + "...", fontsize=9)
     cb = ax.figure.colorbar(mesh, ax=ax, shrink=0.85)
     cb.set_label(f"[{units}]" if units else "")
@@ -75,6 +81,15 @@ def field_map(da, path, *, cmap="viridis", vmin=None, vmax=None, title=None, lan
     -------
     str
         The path written.
+
+    Examples
+    --------
+    >>> import os, tempfile
+    >>> import xarray as xr
+    >>> da = xr.DataArray(np.arange(12.0).reshape(3, 4), dims=("y", "x"), name="v",
+    ...                   attrs={"units": "m s-1", "long_name": "wind speed"})
+    >>> os.path.basename(field_map(da, os.path.join(tempfile.mkdtemp(), "v.png")))
+    'v.png'
     """
     if da.ndim != 2:
         raise ValueError(f"field_map: {da.name} has {da.ndim} dimensions, need 2")
@@ -114,6 +129,16 @@ def scene_panels(fields, path, *, land=None, suptitle=None, ncols=2):
     -------
     str
         The path written.
+
+    Examples
+    --------
+    >>> import os, tempfile
+    >>> import xarray as xr
+    >>> da = xr.DataArray(np.ones((3, 4)), dims=("y", "x"), attrs={"units": "1"})
+    >>> path = scene_panels([(da, {}), (2 * da, {"cmap": "gray"})],
+    ...                     os.path.join(tempfile.mkdtemp(), "p.png"))
+    >>> path.endswith("p.png")
+    True
     """
     n = len(fields)
     nrows = int(np.ceil(n / ncols))
@@ -149,6 +174,15 @@ def scene_overview(products, path, *, title=None):
     -------
     str
         The path written.
+
+    Examples
+    --------
+    >>> import os, tempfile
+    >>> from shortwave import fields
+    >>> from shortwave.scene_synthetic import greyhaven_scene
+    >>> out = fields.scene_products(fields.open_scene(greyhaven_scene((6, 8))), 5.405e9)
+    >>> scene_overview(out, os.path.join(tempfile.mkdtemp(), "o.png")).endswith("o.png")
+    True
     """
     def two_d(da):
         while da.ndim > 2:
