@@ -72,7 +72,7 @@ CONTRAST_MODELS = ("two-scale", "balance", "alpers_huhnerfuss1989")
 ``"alpers_huhnerfuss1989"`` sigma0_slick = sigma0 / y(K_B)
 """
 
-DB_UNITS = "0.1 lg(re 1)"
+from .metadata import DB_UNITS  # noqa: E402  UDUNITS decibel
 """Units written for decibel outputs: the UDUNITS form of the decibel of a ratio, which
 CF checkers accept (plain ``dB`` is not a UDUNITS unit); ``long_name`` says decibels."""
 
@@ -134,17 +134,9 @@ _THICKNESS_UNITS = {"m": 1.0, "meter": 1.0, "meters": 1.0, "metre": 1.0, "metres
                     "micrometres": 1e-6, "micron": 1e-6, "microns": 1e-6, "nm": 1e-9}
 """Film-thickness units accepted and their factor to metres."""
 
-FIELD_METADATA = {
-    "wind_azimuth": {"long_name": "wind direction relative to the radar look "
-                                  "(0 = wind blowing toward the radar)", "units": "degree"},
-    "mean_square_slope_slick": {"long_name": "mean square slope of the film-covered sea "
-                                             "(total)", "units": "1"},
-    "film_cover": {"long_name": "surface film taken as present in the computation "
-                                "(1 film, 0 clean)", "units": "1"},
-    "film_thickness": {"long_name": "thickness of the surface film or oil layer",
-                       "units": "m"},
-}
-"""Attributes of scene outputs that are not in :data:`shortwave.metadata.OUTPUT_METADATA`."""
+FIELD_METADATA = {}
+"""Kept for compatibility: scene attributes now live in
+:data:`shortwave.metadata.OUTPUT_METADATA`."""
 
 
 def _metadata(name):

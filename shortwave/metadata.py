@@ -11,9 +11,12 @@ outputs (xarray's ``apply_ufunc(..., keep_attrs=False)`` first, then this table)
 """
 from __future__ import annotations
 
-__all__ = ["OUTPUT_METADATA", "apply_metadata", "CONVENTIONS"]
+__all__ = ["OUTPUT_METADATA", "apply_metadata", "CONVENTIONS", "DB_UNITS"]
 
 CONVENTIONS = "CF-1.10"
+
+DB_UNITS = "0.1 lg(re 1)"
+"""UDUNITS spelling of the decibel of a ratio (UDUNITS has no ``dB``; CF 1.10 Sect. 3.1)."""
 
 OUTPUT_METADATA = {
     # --- coordinates and inputs --------------------------------------------------------
@@ -82,22 +85,37 @@ OUTPUT_METADATA = {
                "long_name": "normalized radar cross section of the sea (linear)",
                "units": "1"},
     "sigma0_db": {"long_name": "normalized radar cross section of the sea in decibels",
-                  "units": "dB"},
+                  "units": DB_UNITS},
     "sigma0_slick": {
         "standard_name": "surface_backwards_scattering_coefficient_of_radar_wave",
         "long_name": "normalized radar cross section with the surface film (linear)",
         "units": "1"},
     "sigma0_slick_db": {"long_name": "normalized radar cross section with the surface film "
-                                     "in decibels", "units": "dB"},
+                                     "in decibels", "units": DB_UNITS},
     # --- films -------------------------------------------------------------------------
     "damping_ratio": {"long_name": "damping ratio of short waves, film over clean surface",
                       "units": "1"},
     "slick_contrast_db": {
         "long_name": "radar contrast of the film: clean over film-covered backscatter",
-        "units": "dB",
+        "units": DB_UNITS,
         "comment": "screening estimate, not proof of oil; natural films and low wind look "
                    "alike; decisions rest with trained observers and the responsible "
                    "authorities"},
+    # --- extended wave-model spectra (tail) and scenes ----------------------------
+    'significant_wave_height_resolved': {'long_name': 'significant wave height 4 sqrt(m0) of the wave-model (resolved) spectrum', 'units': 'm'},
+    'mean_square_slope_resolved': {'long_name': 'mean square slope of the wave-model (resolved) spectrum', 'units': '1', 'comment': "sum of k(f)^2 E(f, theta) df dtheta over the file's frequencies"},
+    'mean_square_slope_upwind_resolved': {'long_name': 'mean square slope along the wind of the wave-model (resolved) spectrum', 'units': '1'},
+    'mean_square_slope_crosswind_resolved': {'long_name': 'mean square slope across the wind of the wave-model (resolved) spectrum', 'units': '1'},
+    'mean_square_slope_tail': {'long_name': 'mean square slope of the tail above seam_wavenumber', 'units': '1'},
+    'mean_square_slope_upwind_tail': {'long_name': 'mean square slope along the wind of the tail above seam_wavenumber', 'units': '1'},
+    'mean_square_slope_crosswind_tail': {'long_name': 'mean square slope across the wind of the tail above seam_wavenumber', 'units': '1'},
+    'seam_wavenumber': {'long_name': 'wavenumber where the resolved spectrum ends and the tail begins (k of the highest frequency bin edge)', 'units': 'rad m-1'},
+    'wavenumber_bounds': {'units': 'rad m-1'},
+    'depth': {'standard_name': 'sea_floor_depth_below_sea_surface', 'long_name': 'water depth used for the dispersion relation', 'units': 'm'},
+    'wind_azimuth': {'long_name': 'wind direction relative to the radar look (0 = wind blowing toward the radar)', 'units': 'degree'},
+    'mean_square_slope_slick': {'long_name': 'mean square slope of the film-covered sea (total)', 'units': '1'},
+    'film_cover': {'long_name': 'surface film taken as present in the computation (1 film, 0 clean)', 'units': '1'},
+    'film_thickness': {'long_name': 'thickness of the surface film or oil layer', 'units': 'm'},
 }
 
 

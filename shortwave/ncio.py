@@ -96,7 +96,8 @@ def write_netcdf(ds, path, *, inputs=(), overwrite=False, command=None, encoding
         by default.
     compute : bool or callable
         ``True`` writes now.  A callable receives the delayed write (dask) and must compute
-        it (used to show progress), e.g. ``lambda d: d.compute()``.
+        it (used to show progress), e.g. ``lambda d: d.compute()``; when nothing in ``ds``
+        is a dask array the write is eager and the callable is not used (no dask needed).
 
     Returns
     -------
@@ -131,6 +132,9 @@ def write_netcdf(ds, path, *, inputs=(), overwrite=False, command=None, encoding
     for name, var in out.data_vars.items():
         if var.dtype.kind == "f":
             enc[name] = {"zlib": True, "complevel": 4}
+    for name in out.coords:
+        # CF 2.5.1: coordinate variables carry no missing values, so no _FillValue
+        enc[name] = {"_FillValue": None}
     for name, e in (encoding or {}).items():
         enc[name] = {**enc.get(name, {}), **e}
     fd, tmp = tempfile.mkstemp(prefix=".tmp-" + os.path.basename(path) + "-", suffix=".nc",
@@ -138,7 +142,7 @@ def write_netcdf(ds, path, *, inputs=(), overwrite=False, command=None, encoding
     os.close(fd)
     try:
         os.chmod(tmp, 0o666 & ~_umask())   # mkstemp makes 0600; give the usual permissions
-        if callable(compute):
+        if callable(compute) and _has_dask_arrays(out):
             delayed = out.to_netcdf(tmp, engine="netcdf4", format="NETCDF4", encoding=enc,
                                     compute=False)
             compute(delayed)
@@ -149,6 +153,11 @@ def write_netcdf(ds, path, *, inputs=(), overwrite=False, command=None, encoding
         if os.path.exists(tmp):
             os.remove(tmp)
     return path
+
+
+def _has_dask_arrays(ds):
+    """True when any variable of ``ds`` is backed by a dask array (lazy)."""
+    return any(type(v.data).__module__.startswith("dask") for v in ds.variables.values())
 
 
 # =========================================================================================
@@ -347,6 +356,7 @@ UNITS = {
     "m": (1.0, {"m": 1}), "meter": (1.0, {"m": 1}), "meters": (1.0, {"m": 1}),
     "metre": (1.0, {"m": 1}), "metres": (1.0, {"m": 1}),
     "km": (1e3, {"m": 1}), "cm": (1e-2, {"m": 1}), "mm": (1e-3, {"m": 1}),
+    "um": (1e-6, {"m": 1}), "micrometre": (1e-6, {"m": 1}), "micrometer": (1e-6, {"m": 1}),
     "s": (1.0, {"s": 1}), "sec": (1.0, {"s": 1}), "second": (1.0, {"s": 1}),
     "seconds": (1.0, {"s": 1}), "min": (60.0, {"s": 1}), "minute": (60.0, {"s": 1}),
     "minutes": (60.0, {"s": 1}), "h": (3600.0, {"s": 1}), "hr": (3600.0, {"s": 1}),

@@ -625,51 +625,14 @@ _OUT_NAMES = {
     "seam_wavenumber": "seam_wavenumber", "inverse_wave_age": "inverse_wave_age"}
 
 TAIL_METADATA = {
-    "directional_spectrum": {
-        "long_name": "wavenumber-direction spectrum of surface elevation F(k, theta): "
-                     "resolved wave-model part extended with a capillary-gravity tail",
-        "units": "m3 rad-1",
-        "comment": "cell averages over the wavenumber cells (wavenumber_bounds); the double "
-                   "integral over wavenumber and direction equals the elevation variance; "
-                   "below seam_wavenumber the wave-model spectrum with its direction of "
-                   "travel, above it the tail model (centrosymmetric for elfouhaily1997)"},
-    "curvature_spectrum": {
-        "long_name": "omnidirectional curvature (saturation) spectrum B(k) = k^3 S(k) of the "
-                     "extended spectrum", "units": "1"},
-    "significant_wave_height": {"standard_name": "sea_surface_wave_significant_height",
-                                "long_name": "significant wave height 4 sqrt(m0) of the "
-                                             "extended spectrum", "units": "m"},
-    "significant_wave_height_resolved": {
-        "long_name": "significant wave height 4 sqrt(m0) of the wave-model (resolved) "
-                     "spectrum", "units": "m"},
-    "mean_square_slope_resolved": {
-        "long_name": "mean square slope of the wave-model (resolved) spectrum", "units": "1",
-        "comment": "sum of k(f)^2 E(f, theta) df dtheta over the file's frequencies"},
-    "mean_square_slope_upwind_resolved": {
-        "long_name": "mean square slope along the wind of the wave-model (resolved) "
-                     "spectrum", "units": "1"},
-    "mean_square_slope_crosswind_resolved": {
-        "long_name": "mean square slope across the wind of the wave-model (resolved) "
-                     "spectrum", "units": "1"},
-    "mean_square_slope_tail": {"long_name": "mean square slope of the tail above "
-                                            "seam_wavenumber", "units": "1"},
-    "mean_square_slope_upwind_tail": {"long_name": "mean square slope along the wind of the "
-                                                   "tail above seam_wavenumber", "units": "1"},
-    "mean_square_slope_crosswind_tail": {
-        "long_name": "mean square slope across the wind of the tail above seam_wavenumber",
-        "units": "1"},
-    "seam_wavenumber": {"long_name": "wavenumber where the resolved spectrum ends and the "
-                                     "tail begins (k of the highest frequency bin edge)",
-                        "units": "rad m-1"},
-    "inverse_wave_age": {"long_name": "inverse wave age U10/c_p given to the tail model",
-                         "units": "1"},
-    "wavenumber_bounds": {"units": "rad m-1"},
-    "depth": {"standard_name": "sea_floor_depth_below_sea_surface",
-              "long_name": "water depth used for the dispersion relation", "units": "m"},
+    'directional_spectrum': {'long_name': 'wavenumber-direction spectrum of surface elevation F(k, theta): resolved wave-model part extended with a capillary-gravity tail', 'units': 'm3 rad-1', 'comment': 'cell averages over the wavenumber cells (wavenumber_bounds); the double integral over wavenumber and direction equals the elevation variance; below seam_wavenumber the wave-model spectrum with its direction of travel, above it the tail model (centrosymmetric for elfouhaily1997)'},
+    'curvature_spectrum': {'long_name': 'omnidirectional curvature (saturation) spectrum B(k) = k^3 S(k) of the extended spectrum', 'units': '1'},
+    'significant_wave_height': {'standard_name': 'sea_surface_wave_significant_height', 'long_name': 'significant wave height 4 sqrt(m0) of the extended spectrum', 'units': 'm'},
+    'inverse_wave_age': {'long_name': 'inverse wave age U10/c_p given to the tail model', 'units': '1'},
 }
-"""Attributes of the ``extend`` outputs that :data:`shortwave.metadata.OUTPUT_METADATA`
-lacks, or where the wavenumber-direction spectrum on geographic directions needs a more
-precise description; applied after that table."""
+"""Wording of the ``extend`` outputs where the generic entry of
+:data:`shortwave.metadata.OUTPUT_METADATA` is less precise (the spectra are *extended*);
+applied after that table.  Everything else lives in that one table."""
 
 
 def _direction_convention(dvar, given):

@@ -197,7 +197,7 @@ def test_cells_agree_with_point_calls(small, products):
         assert float(products.bragg_wavenumber[j, i]) == pytest.approx(kb, rel=1e-12)
         assert float(products.bragg_curvature[j, i]) == pytest.approx(
             float(spectrum.curvature(kb, u)), rel=1e-12)
-        # the radar model tabulates its spectra on a 0.05 m/s wind grid for many cells
+        # the radar model tabulates its spectra on a 0.025 m/s wind grid for many cells
         # (shortwave.radar.backscatter.WIND_STEP): a few tenths of a percent
         point = float(radar.nrcs(C_BAND, inc, u, "VV", az,
                                  permittivity=permittivity(C_BAND, t, s)))

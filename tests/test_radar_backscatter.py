@@ -157,7 +157,7 @@ def test_broadcasting_nan_and_scalars():
 
 
 def test_many_winds_interpolated_on_a_grid():
-    # beyond MAX_EXACT_WINDS distinct winds the spectra are tabulated every 0.05 m/s
+    # beyond MAX_EXACT_WINDS distinct winds the spectra are tabulated every 0.025 m/s (anchored at multiples of the step)
     u = np.linspace(3.013, 19.97, 600)
     grid = to_db(nrcs(C, 35.0, u, "HH", 30.0, permittivity=66.2 - 34.4j))
     exact = np.concatenate([to_db(nrcs(C, 35.0, u[i:i + 200], "HH", 30.0,

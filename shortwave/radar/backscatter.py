@@ -82,7 +82,7 @@ MODELS = ("two-scale", "bragg", "tilted-bragg", "specular", "breaking")
 MAX_EXACT_WINDS = 256
 """Up to this many distinct wind speeds, spectra are evaluated at each one exactly."""
 
-WIND_STEP = 0.05
+WIND_STEP = 0.025
 """Wind-grid step [m s-1] used beyond :data:`MAX_EXACT_WINDS` distinct winds."""
 
 DEFAULT_TILT_NODES = (12, 6)
@@ -235,10 +235,14 @@ def _wind_rows(wind):
         if uniq.size <= MAX_EXACT_WINDS:
             winds = uniq
         else:
-            lo, hi = uniq[0], uniq[-1]
-            n = int(np.ceil((hi - lo) / WIND_STEP)) + 1
-            winds = lo + WIND_STEP * np.arange(n)
-            winds[-1] = max(winds[-1], hi)
+            # grid anchored at multiples of WIND_STEP, so that the nodes (and results)
+            # do not depend on which other winds share the call (e.g. a dask chunk)
+            lo = np.floor(uniq[0] / WIND_STEP) * WIND_STEP
+            hi = np.ceil(uniq[-1] / WIND_STEP) * WIND_STEP
+            n = int(round((hi - lo) / WIND_STEP)) + 1
+            winds = lo + WIND_STEP * np.arange(max(n, 2))
+            if winds[0] <= 0:   # no node at zero wind: start at the lightest wind
+                winds = np.concatenate([uniq[:1], winds[winds > uniq[0]]])
     w = np.where(np.isfinite(wind), wind, winds[0])
     if winds.size == 1:
         return winds, np.zeros(w.shape, dtype=np.intp), np.zeros(w.shape)
