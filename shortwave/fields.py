@@ -769,10 +769,7 @@ def _inverse_contrast(k, wind_speed, film, model, water):
     from . import slick
     with warnings.catch_warnings():   # overdamped short waves are expected: factor 0 there
         warnings.filterwarnings("ignore", message="film damping", category=RuntimeWarning)
-        kk = np.asarray(slick.spectral_contrast(k, wind_speed, film, model, water,
-                                                on_failure="nan"))  # A&H89 / balance at k
-    with np.errstate(divide="ignore", invalid="ignore"):
-        return np.where(np.isfinite(kk) & (kk > 0), 1.0 / kk, 0.0)
+        return slick.inverse_spectral_contrast(k, wind_speed, film, model, water)
 
 
 def _damped_mss(winds, film, model, water, spectrum_model, n=None):

@@ -68,7 +68,8 @@ from .dispersion import angular_frequency, phase_speed
 from .water import ValidityWarning, as_liquid
 
 __all__ = ["MODELS", "CAUTION", "PLANT_COEFFICIENT", "wind_growth_rate",
-           "alpers_huhnerfuss1989", "balance_contrast", "spectral_contrast", "contrast",
+           "alpers_huhnerfuss1989", "balance_contrast", "spectral_contrast", "inverse_spectral_contrast",
+           "contrast",
            "contrast_db", "checked_bragg_wavenumber", "damped_spectrum", "damped_curvature",
            "damped_mean_square_slope", "cox_munk1954_slick_mss"]
 
@@ -458,6 +459,47 @@ def _warn_incidence(incidence_deg):
                       ValidityWarning, stacklevel=3)
 
 
+def inverse_spectral_contrast(k, wind_speed, film, model="alpers_huhnerfuss1989", water=None):
+    """Factor multiplying the clean wave spectrum to give the film-covered one, 1 / K(k).
+
+    Parameters
+    ----------
+    k : numeric
+        Wavenumber [rad m-1] (clipped to :data:`shortwave.films.K_RANGE` as in
+        :func:`spectral_contrast`).
+    wind_speed : numeric
+        U10 [m s-1] (used by the balance model).
+    film : Monolayer or OilLayer or str
+        The film.
+    model : {"alpers_huhnerfuss1989", "balance"}
+        How damping becomes spectral contrast K(k).
+    water : Water, optional
+        The sea water.
+
+    Returns
+    -------
+    numeric
+        1 / K(k) in [0, 1] for a damping film [1].  Where the film overdamps the wave (no
+        propagating root of the film dispersion relation: thick viscous oil, very short
+        waves) the factor is 0: those waves are taken as fully suppressed, and the film
+        module's warning says how many wavenumbers that concerned.
+
+    Notes
+    -----
+    Used as ``spectrum_factor`` of :func:`shortwave.radar.nrcs` for the two-scale contrast
+    (``model="two-scale"`` here, and the scene module).
+
+    Examples
+    --------
+    >>> f = inverse_spectral_contrast(200.0, 5.0, "oleyl-alcohol")
+    >>> 0.0 < float(f) < 1.0
+    True
+    """
+    kk = np.asarray(spectral_contrast(k, wind_speed, film, model, water, on_failure="nan"))
+    with np.errstate(divide="ignore", invalid="ignore"):
+        return np.where(np.isfinite(kk) & (kk > 0), 1.0 / kk, 0.0)
+
+
 def _two_scale(film, frequency_hz, incidence_deg, wind_speed, water, azimuth_deg,
                polarization, on_failure, radar_options):
     from . import radar
@@ -475,8 +517,10 @@ def _two_scale(film, frequency_hz, incidence_deg, wind_speed, water, azimuth_deg
     w = water
 
     def factor(k):
-        return 1.0 / np.asarray(spectral_contrast(k, 1.0, film, "alpers_huhnerfuss1989", w,
-                                                  on_failure=on_failure))
+        if on_failure == "raise":
+            return 1.0 / np.asarray(spectral_contrast(k, 1.0, film, "alpers_huhnerfuss1989",
+                                                      w, on_failure="raise"))
+        return inverse_spectral_contrast(k, 1.0, film, "alpers_huhnerfuss1989", w)
 
     opts = dict(radar_options or {})
     clean = np.asarray(radar.nrcs(frequency_hz, incidence_deg, wind_speed, polarization,

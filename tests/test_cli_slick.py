@@ -104,3 +104,18 @@ def test_untrackable_cells_are_reported(capsys):
     assert code == 0
     assert "could not be followed" in err
     assert "nan" in out
+
+
+def test_two_scale_contrast_of_a_thick_oil_layer(capsys):
+    # thick viscous oil overdamps the shortest waves; those count as fully suppressed
+    # (factor 0) instead of failing the whole two-scale computation
+    from shortwave.cli import main
+    code = main(["slick", "--film", "heavy-crude", "--radar", "C", "--incidence", "30",
+                 "--wind", "3", "6", "--two-scale", "--format", "csv"])
+    out = capsys.readouterr().out
+    assert code == 0
+    rows = [ln.split(",") for ln in out.strip().splitlines() if ln and ln[0].isalpha()]
+    header = rows[0]
+    col = [i for i, h in enumerate(header) if h.startswith("contrast_two_scale")][0]
+    vals = [float(r[col]) for r in rows[1:]]
+    assert len(vals) == 2 and all(v > 0 for v in vals)
