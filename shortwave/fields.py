@@ -434,36 +434,30 @@ def open_scene(source, *, overrides=None, chunks=None, swath=None, across_dim=No
 
     # --- water -------------------------------------------------------------------------
     data = {"wind_speed": wind, "wind_azimuth": azimuth, "incidence_angle": inc}
-    sst = _find(ds, "sea_surface_temperature", over)
-    if sst is not None:
-        data["temperature_c"] = _convert(sst, "sea_surface_temperature", "K") - 273.15
-        names["sea_surface_temperature"] = sst.name
-        grid.append((sst, "sea_surface_temperature"))
-    elif temperature_c is not None:
-        data["temperature_c"] = xr.DataArray(float(temperature_c))
-        names["sea_surface_temperature"] = f"{float(temperature_c):g} degC (constant)"
-    sss = _find(ds, "sea_surface_salinity", over)
-    if sss is not None:
-        data["salinity"] = _convert_table(sss, "sea_surface_salinity", _SALINITY_UNITS,
-                                          "g kg-1")
-        names["sea_surface_salinity"] = sss.name
-        grid.append((sss, "sea_surface_salinity"))
-    elif salinity is not None:
-        data["salinity"] = xr.DataArray(float(salinity))
-        names["sea_surface_salinity"] = f"{float(salinity):g} g/kg (constant)"
+
+    def field_or_constant(key, role, convert, constant=None, unit=""):
+        """data[key] from the file's variable of ``role``, else from ``constant``."""
+        var = _find(ds, role, over)
+        if var is not None:
+            data[key] = convert(var)
+            names[role] = var.name
+            grid.append((var, role))
+        elif constant is not None:
+            data[key] = xr.DataArray(float(constant))
+            names[role] = f"{float(constant):g} {unit} (constant)"
+
+    field_or_constant("temperature_c", "sea_surface_temperature",
+                      lambda da: _convert(da, "sea_surface_temperature", "K") - 273.15,
+                      temperature_c, "degC")
+    field_or_constant("salinity", "sea_surface_salinity",
+                      lambda da: _convert_table(da, "sea_surface_salinity", _SALINITY_UNITS,
+                                                "g kg-1"),
+                      salinity, "g/kg")
 
     # --- film --------------------------------------------------------------------------
-    mask = _find(ds, "slick_mask", over)
-    if mask is not None:
-        data["slick_mask"] = mask.astype(float)
-        names["slick_mask"] = mask.name
-        grid.append((mask, "slick_mask"))
-    thick = _find(ds, "film_thickness", over)
-    if thick is not None:
-        data["film_thickness"] = _convert_table(thick, "film_thickness", _THICKNESS_UNITS,
-                                                "m")
-        names["film_thickness"] = thick.name
-        grid.append((thick, "film_thickness"))
+    field_or_constant("slick_mask", "slick_mask", lambda da: da.astype(float))
+    field_or_constant("film_thickness", "film_thickness",
+                      lambda da: _convert_table(da, "film_thickness", _THICKNESS_UNITS, "m"))
 
     _check_same_grid(grid)
     ref = wind_src[0][0]

@@ -7,13 +7,12 @@ prints sigma0 (linear and dB) from the composite model of :func:`shortwave.radar
 """
 from __future__ import annotations
 
-import json
-import sys
 import warnings
 
 import numpy as np
 
-from ..tables import FORMATS, format_table
+from ._common import (add_format_arguments, add_water_arguments, print_table,
+                      report_warnings, report_written, water_from_args)
 from .bragg import _float, angle_values, radar_argument
 
 NAME = "backscatter"
@@ -72,10 +71,8 @@ def add_arguments(parser):
                         help="U10/c_p of the sea (0.84 = fully developed)")
     parser.add_argument("--fetch", type=_float("fetch", positive=True), default=None,
                         metavar="M", help="fetch [m] instead of --inverse-wave-age")
-    parser.add_argument("--temperature", "-t", type=_float("temperature"), default=15.0,
-                        metavar="DEGC", help="water temperature [degC] (permittivity)")
-    parser.add_argument("--salinity", "-s", type=_float("salinity"), default=35.0,
-                        metavar="G/KG", help="salinity [g/kg] (permittivity)")
+    add_water_arguments(parser, temperature_help="water temperature [degC] (permittivity)",
+                        salinity_help="salinity [g/kg] (permittivity)", named=True)
     parser.add_argument("--cutoff-ratio", type=_float("cutoff ratio", positive=True),
                         default=0.25, metavar="R",
                         help="k_d / k_Bragg: waves longer than this tilt the Bragg facets")
@@ -84,12 +81,7 @@ def add_arguments(parser):
     parser.add_argument("--components", action="store_true",
                         help="add columns for each term (specular, Bragg flat and tilted, "
                         "breaking) and the breaking fraction")
-    parser.add_argument("--format", choices=FORMATS, default="text",
-                        help="aligned text for people, csv or json for programs")
-    parser.add_argument("--csv", action="store_const", const="csv", dest="format",
-                        help="same as --format csv")
-    parser.add_argument("--json", action="store_const", const="json", dest="format",
-                        help="same as --format json")
+    add_format_arguments(parser, shortcuts=True)
     parser.add_argument("--plot", metavar="FILE.png", default=None,
                         help="also write sigma0 [dB] against incidence as PNG")
 
@@ -144,7 +136,6 @@ def backscatter_table(radar, incidences, winds, azimuths, polarizations, *, wate
 
 
 def run(args):
-    from ..water import Water
     th = angle_values(args.incidence, high=90.0, closed_high=False)
     spectrum_options = {}
     if args.fetch is not None and args.inverse_wave_age is not None:
@@ -158,35 +149,24 @@ def run(args):
     pols = list(dict.fromkeys("HV" if p == "VH" else p for p in args.polarization))
     with warnings.catch_warnings(record=True) as caught:
         warnings.simplefilter("always")
-        water = Water(args.temperature, args.salinity)
+        water = water_from_args(args)
         table = backscatter_table(args.radar, th, args.wind, args.azimuth, pols, water=water,
                                   model=args.model, components=args.components,
                                   spectrum_model=args.spectrum,
                                   spectrum_options=spectrum_options,
                                   cutoff_ratio=args.cutoff_ratio,
                                   breaking=not args.no_breaking)
-    seen = set()
-    for w in caught:
-        msg = str(w.message)
-        if msg not in seen:
-            seen.add(msg)
-            print(f"shortwave {NAME}: warning: {msg}", file=sys.stderr)
+    report_warnings(NAME, caught, unique=True)
     label, f = args.radar
     title = (f"sigma0 of the sea, radar {label} ({f / 1e9:g} GHz), model {args.model}, "
              f"spectrum {args.spectrum}; water {args.temperature:g} degC, "
              f"{args.salinity:g} g/kg; azimuth 0 = upwind\n")
-    if args.format == "json":
-        doc = json.loads(format_table(table, fmt="json", units=UNITS))
-        doc = {"model": args.model, "spectrum": args.spectrum,
-               "water": {"temperature_c": args.temperature, "salinity": args.salinity},
-               **doc}
-        print(json.dumps(doc, indent=1))
-    elif args.format == "csv":
-        print(format_table(table, fmt="csv", units=UNITS))
-    else:
-        print(format_table(table, fmt="text", units=UNITS, title=title))
+    print_table(table, args.format, units=UNITS, title=title,
+                head={"model": args.model, "spectrum": args.spectrum,
+                      "water": {"temperature_c": args.temperature,
+                                "salinity": args.salinity}})
     if args.plot:
         from ..plots.radar import backscatter_plot
         path = backscatter_plot(table, args.plot, title=title.strip())
-        print(f"wrote {path}", file=sys.stderr if args.format != "text" else sys.stdout)
+        report_written(path, args.format)
     return 0

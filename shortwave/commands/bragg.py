@@ -10,14 +10,14 @@ incidence, one curve per radar.
 from __future__ import annotations
 
 import argparse
-import json
 import math
-import sys
 import warnings
+from functools import partial
 
 import numpy as np
 
-from ..tables import FORMATS, format_table
+from ._common import (add_format_arguments, add_water_arguments, number, parse_radar,
+                      print_table, report_warnings, report_written, water_from_args)
 
 NAME = "bragg"
 HELP = "Bragg-resonant ocean waves and Doppler lines for radar bands and incidence angles"
@@ -42,19 +42,8 @@ UNITS = {"radar": "", "frequency": "Hz", "incidence": "deg", "radar_wavelength":
          "doppler_receding": "Hz"}
 
 
-def _float(kind, *, positive=False, allow_inf=False):
-    def convert(text):
-        try:
-            v = float(text)
-        except ValueError:
-            raise argparse.ArgumentTypeError(f"{kind}: not a number: {text!r}") from None
-        if math.isnan(v) or (math.isinf(v) and not (allow_inf and v > 0)):
-            raise argparse.ArgumentTypeError(f"{kind} must be finite, got {text!r}")
-        if positive and v <= 0:
-            raise argparse.ArgumentTypeError(f"{kind} must be > 0, got {text!r}")
-        return v
-    convert.__name__ = kind
-    return convert
+_float = partial(number, named=True)
+"""argparse type: a finite float (``positive=True``: > 0); errors name the quantity."""
 
 
 def radar_argument(text):
@@ -65,24 +54,10 @@ def radar_argument(text):
     >>> radar_argument("ku"), radar_argument("13.5MHz")
     (('Ku', 13575000000.0), ('13.5MHz', 13500000.0))
     """
-    from ..radar import band, parse_frequency
     try:
-        f = parse_frequency(text)
+        return parse_radar(text)
     except ValueError as exc:
         raise argparse.ArgumentTypeError(str(exc)) from None
-    try:
-        label = band(text).letter
-    except ValueError:
-        label = _frequency_label(f)
-    return label, f
-
-
-def _frequency_label(f):
-    if f >= 1e9:
-        return f"{f / 1e9:g}GHz"
-    if f >= 1e6:
-        return f"{f / 1e6:g}MHz"
-    return f"{f:g}Hz"
 
 
 def angle_values(values, *, low=0.0, high=90.0, closed_high=True, name="--incidence"):
@@ -136,16 +111,9 @@ def add_arguments(parser):
                         help="surface current toward the radar [m/s] (shifts both lines)")
     parser.add_argument("--depth", type=_float("depth", positive=True, allow_inf=True),
                         default=math.inf, metavar="M", help="water depth [m]; inf = deep")
-    parser.add_argument("--temperature", "-t", type=_float("temperature"), default=15.0,
-                        metavar="DEGC", help="water temperature [degC] (surface tension)")
-    parser.add_argument("--salinity", "-s", type=_float("salinity"), default=35.0,
-                        metavar="G/KG", help="absolute salinity [g/kg]")
-    parser.add_argument("--format", choices=FORMATS, default="text",
-                        help="aligned text for people, csv or json for programs")
-    parser.add_argument("--csv", action="store_const", const="csv", dest="format",
-                        help="same as --format csv")
-    parser.add_argument("--json", action="store_const", const="json", dest="format",
-                        help="same as --format json")
+    add_water_arguments(parser, temperature_help="water temperature [degC] (surface tension)",
+                        named=True)
+    add_format_arguments(parser, shortcuts=True)
     parser.add_argument("--plot", metavar="FILE.png", default=None,
                         help="also write Bragg wavelength against incidence as PNG")
 
@@ -203,30 +171,22 @@ def _title(water, current, depth):
 
 
 def run(args):
-    from ..water import Water
     radars = args.radar or [radar_argument(b) for b in DEFAULT_RADARS]
     incid = None if args.incidence is None else angle_values(args.incidence)
     with warnings.catch_warnings(record=True) as caught:
         warnings.simplefilter("always")
-        water = Water(args.temperature, args.salinity)
+        water = water_from_args(args)
         table = bragg_table(radars, incid, water, current=args.current, depth=args.depth)
-    for w in caught:
-        print(f"shortwave {NAME}: warning: {w.message}", file=sys.stderr)
-    if args.format == "json":
-        doc = json.loads(format_table(table, fmt="json", units=UNITS))
-        doc = {"water": {"temperature_c": float(water.temperature_c),
-                         "salinity": float(water.salinity),
-                         "depth": None if math.isinf(args.depth) else args.depth},
-               "current": args.current, **doc}
-        print(json.dumps(doc, indent=1))
-    elif args.format == "csv":
-        print(format_table(table, fmt="csv", units=UNITS))
-    else:
-        print(format_table(table, fmt="text", units=UNITS,
-                           title=_title(water, args.current, args.depth)))
+    report_warnings(NAME, caught)
+    head = {"water": {"temperature_c": float(water.temperature_c),
+                      "salinity": float(water.salinity),
+                      "depth": None if math.isinf(args.depth) else args.depth},
+            "current": args.current}
+    print_table(table, args.format, units=UNITS, head=head,
+                title=_title(water, args.current, args.depth))
     if args.plot:
         from ..plots.radar import bragg_scales_plot
         path = bragg_scales_plot(radars, args.plot, water=water, depth=args.depth,
                                  marks=table)
-        print(f"wrote {path}", file=sys.stderr if args.format != "text" else sys.stdout)
+        report_written(path, args.format)
     return 0

@@ -9,16 +9,14 @@ along and across the wind) to a new CF-1.10 NetCDF file.  Prints a summary table
 """
 from __future__ import annotations
 
-import argparse
-import json
-import math
 import os
 import sys
 import warnings
+from functools import partial
 
 import numpy as np
 
-from ..tables import FORMATS, format_table
+from ._common import add_format_arguments, number, print_table, report_warnings, report_written
 
 NAME = "extend"
 HELP = "extend wave-model spectra (NetCDF) with the capillary-gravity tail"
@@ -36,19 +34,8 @@ DESCRIPTION = (
     "to, sorted or not, packed or not are all read.  NaN spectra (land) stay NaN.")
 
 
-def _number(kind, *, positive=True):
-    def convert(text):
-        try:
-            v = float(text)
-        except ValueError:
-            raise argparse.ArgumentTypeError(f"not a number: {text!r}") from None
-        if not math.isfinite(v):
-            raise argparse.ArgumentTypeError(f"{kind} must be finite, got {text!r}")
-        if positive and v <= 0:
-            raise argparse.ArgumentTypeError(f"{kind} must be > 0, got {text!r}")
-        return v
-    convert.__name__ = kind
-    return convert
+_number = partial(number, positive=True)
+"""argparse type: a finite, positive (unless ``positive=False``) float."""
 
 
 def _depth(text):
@@ -130,8 +117,7 @@ def add_arguments(parser):
                         help="which spectrum to draw, e.g. --plot-at "
                         "station_name='Corrow Bank' --plot-at time=2031-10-02T06:00 "
                         "(default: the first)")
-    parser.add_argument("--format", choices=FORMATS, default="text",
-                        help="how to print the summary table")
+    add_format_arguments(parser, help="how to print the summary table")
 
 
 def _units_map(items):
@@ -278,8 +264,7 @@ def run(args):
     finally:
         if client is not None:
             client.close()
-    for w in caught:
-        print(f"shortwave {NAME}: warning: {w.message}", file=sys.stderr)
+    report_warnings(NAME, caught)
 
     written = ncio.open_input(args.output)
     try:
@@ -294,14 +279,8 @@ def run(args):
     head = (f"{counts['spectra']} spectra from {args.input}: {counts['extended']} extended, "
             f"{counts['nan_spectra']} NaN spectra (kept NaN), {counts['no_wind']} without "
             f"wind (tail NaN); wrote {args.output}")
-    if args.format == "json":
-        doc = json.loads(format_table(table, fmt="json"))
-        print(json.dumps({"counts": counts, "output": args.output, **doc}, indent=1))
-    elif args.format == "csv":
-        print(head, file=sys.stderr)
-        print(format_table(table, fmt="csv"))
-    else:
-        print(format_table(table, fmt="text", title=head + "\n"))
+    print_table(table, args.format, title=head + "\n", note=head,
+                head={"counts": counts, "output": args.output})
     if png:
-        print(f"wrote {png}", file=sys.stderr if args.format != "text" else sys.stdout)
+        report_written(png, args.format)
     return 0

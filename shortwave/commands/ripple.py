@@ -8,15 +8,14 @@ wavelength.
 """
 from __future__ import annotations
 
-import argparse
-import json
 import math
-import sys
 import warnings
+from functools import partial
 
 import numpy as np
 
-from ..tables import FORMATS, format_table
+from ._common import (add_format_arguments, add_water_arguments, number, print_table,
+                      report_warnings, report_written, water_from_args)
 
 NAME = "ripple"
 HELP = "speeds, frequencies and viscous damping of capillary-gravity waves on sea water"
@@ -36,20 +35,8 @@ UNITS = {"wavelength": "m", "wavenumber": "rad/m", "frequency": "Hz", "period": 
          "spatial_damping_rate": "1/m"}
 
 
-def _number(kind, *, positive=True, allow_inf=False):
-    """argparse type: a finite (optionally positive) float, with a one-line error."""
-    def convert(text):
-        try:
-            v = float(text)
-        except ValueError:
-            raise argparse.ArgumentTypeError(f"not a number: {text!r}") from None
-        if math.isnan(v) or (math.isinf(v) and not (allow_inf and v > 0)):
-            raise argparse.ArgumentTypeError(f"{kind} must be finite, got {text!r}")
-        if positive and v <= 0:
-            raise argparse.ArgumentTypeError(f"{kind} must be > 0, got {text!r}")
-        return v
-    convert.__name__ = kind
-    return convert
+_number = partial(number, positive=True)
+"""argparse type: a finite, positive (unless ``positive=False``) float."""
 
 
 def add_arguments(parser):
@@ -58,11 +45,7 @@ def add_arguments(parser):
                       metavar="M", help="wavelengths [m], e.g. 0.017 0.05 (default: 3 mm to 1 m)")
     what.add_argument("--frequency", "-f", nargs="+", type=_number("frequency"),
                       metavar="HZ", help="wave frequencies [Hz], e.g. 5 13.5")
-    parser.add_argument("--temperature", "-t", type=_number("temperature", positive=False),
-                        default=15.0, metavar="DEGC", help="water temperature [degC]")
-    parser.add_argument("--salinity", "-s", type=_number("salinity", positive=False),
-                        default=35.0, metavar="G/KG",
-                        help="absolute salinity [g/kg]; 0 for fresh water")
+    add_water_arguments(parser, salinity_help="absolute salinity [g/kg]; 0 for fresh water")
     parser.add_argument("--depth", "-d", type=_number("depth", allow_inf=True),
                         default=math.inf, metavar="M",
                         help="water depth [m]; inf for deep water")
@@ -73,8 +56,7 @@ def add_arguments(parser):
                         "(e.g. 0.050 for a surface with a film)")
     parser.add_argument("--viscosity", type=_number("viscosity"), default=None,
                         metavar="M2/S", help="override the kinematic viscosity [m2/s]")
-    parser.add_argument("--format", choices=FORMATS, default="text",
-                        help="aligned text for people, csv or json for programs")
+    add_format_arguments(parser)
     parser.add_argument("--plot", metavar="FILE.png", default=None,
                         help="also write phase and group speed against wavelength as PNG")
 
@@ -184,29 +166,19 @@ def _title(s):
 
 
 def run(args):
-    from ..water import Water
-
     with warnings.catch_warnings(record=True) as caught:
         warnings.simplefilter("always")
-        water = Water(args.temperature, args.salinity, density=args.density,
-                      surface_tension=args.surface_tension,
-                      kinematic_viscosity=args.viscosity)
+        water = water_from_args(args, density=args.density,
+                                surface_tension=args.surface_tension,
+                                kinematic_viscosity=args.viscosity)
         table = ripple_table(water, wavelength=args.wavelength, frequency=args.frequency,
                              depth=args.depth)
         info = summary(water, args.depth)
-    for w in caught:
-        print(f"shortwave {NAME}: warning: {w.message}", file=sys.stderr)
+    report_warnings(NAME, caught)
 
-    if args.format == "json":
-        doc = json.loads(format_table(table, fmt="json", units=UNITS))
-        # strict JSON has no Infinity: deep water is written as depth null
-        water_doc = {**info, "depth": None if math.isinf(info["depth"]) else info["depth"]}
-        doc = {"water": water_doc, **doc}
-        print(json.dumps(doc, indent=1))
-    elif args.format == "csv":
-        print(format_table(table, fmt="csv", units=UNITS))
-    else:
-        print(format_table(table, fmt="text", units=UNITS, title=_title(info)))
+    # strict JSON has no Infinity: deep water is written as depth null
+    water_doc = {**info, "depth": None if math.isinf(info["depth"]) else info["depth"]}
+    print_table(table, args.format, units=UNITS, title=_title(info), head={"water": water_doc})
 
     if args.plot:
         from ..plots.dispersion import speed_curves
@@ -215,5 +187,5 @@ def run(args):
         hi = max(10.0, float(np.max(lam)) * 1.5)
         path = speed_curves(water, args.plot, depth=args.depth, wavelength_range=(lo, hi),
                             marks=lam)
-        print(f"wrote {path}", file=sys.stderr if args.format != "text" else sys.stdout)
+        report_written(path, args.format)
     return 0

@@ -6,6 +6,9 @@ import math
 import os
 import sys
 import time
+from functools import partial
+
+from ._common import number
 
 NAME = "scene"
 HELP = "radar products for every cell of a gridded scene (NetCDF in, NetCDF out)"
@@ -26,21 +29,8 @@ ROLES_HELP = ("wind_speed, wind_direction, eastward_wind, northward_wind, incide
               "slick_mask, film_thickness")
 
 
-def _number(kind, *, positive=False, nonnegative=False):
-    def convert(text):
-        try:
-            v = float(text)
-        except ValueError:
-            raise argparse.ArgumentTypeError(f"{kind}: not a number: {text!r}") from None
-        if not math.isfinite(v):
-            raise argparse.ArgumentTypeError(f"{kind} must be finite, got {text!r}")
-        if nonnegative and v < 0:
-            raise argparse.ArgumentTypeError(f"{kind} must be >= 0, got {text!r}")
-        if positive and v <= 0:
-            raise argparse.ArgumentTypeError(f"{kind} must be > 0, got {text!r}")
-        return v
-    convert.__name__ = kind
-    return convert
+_number = partial(number, named=True)
+"""argparse type: a finite float (``positive``: > 0, ``nonnegative``: >= 0)."""
 
 
 def _pair(text):

@@ -9,15 +9,14 @@ common bands marked.  Every output carries the caution of :data:`shortwave.slick
 """
 from __future__ import annotations
 
-import argparse
-import json
-import math
-import sys
 import warnings
+from functools import partial
 
 import numpy as np
 
-from ..tables import FORMATS, format_table
+from ..tables import format_table
+from ._common import (add_format_arguments, add_water_arguments, number, parse_radar,
+                      print_table, report_warnings, report_written, water_from_args)
 
 NAME = "slick"
 HELP = "film damping ratio and radar slick contrast against wind (screening estimate)"
@@ -41,21 +40,8 @@ COMMON_BANDS = ("L", "S", "C", "X", "Ku")
 """Bands whose Bragg wavenumbers are marked on the plot."""
 
 
-def _number(kind, *, positive=True, nonnegative=False):
-    def convert(text):
-        try:
-            v = float(text)
-        except ValueError:
-            raise argparse.ArgumentTypeError(f"not a number: {text!r}") from None
-        if not math.isfinite(v):
-            raise argparse.ArgumentTypeError(f"{kind} must be finite, got {text!r}")
-        if nonnegative and v < 0:
-            raise argparse.ArgumentTypeError(f"{kind} must be >= 0, got {text!r}")
-        if positive and not nonnegative and v <= 0:
-            raise argparse.ArgumentTypeError(f"{kind} must be > 0, got {text!r}")
-        return v
-    convert.__name__ = kind
-    return convert
+_number = partial(number, positive=True)
+"""argparse type: a finite float, > 0 (``nonnegative=True``: >= 0; ``positive=False``: any)."""
 
 
 def add_arguments(parser):
@@ -112,12 +98,8 @@ def add_arguments(parser):
                         help="also compute the contrast with the two-scale backscatter model")
     parser.add_argument("--polarization", default="VV", choices=("VV", "HH"),
                         help="polarisation of the two-scale model")
-    parser.add_argument("--temperature", "-t", type=_number("temperature", positive=False),
-                        default=15.0, metavar="DEGC", help="water temperature [degC]")
-    parser.add_argument("--salinity", "-s", type=_number("salinity", positive=False),
-                        default=35.0, metavar="G/KG", help="absolute salinity [g/kg]")
-    parser.add_argument("--format", choices=FORMATS, default="text",
-                        help="aligned text for people, csv or json for programs")
+    add_water_arguments(parser)
+    add_format_arguments(parser)
     parser.add_argument("--plot", metavar="FILE.png", default=None,
                         help="also write y(k) with the Bragg wavenumbers of common bands")
 
@@ -187,16 +169,7 @@ def presets_table():
 
 
 def _radars(values):
-    from ..radar import band, parse_frequency
-    out = []
-    for v in values:
-        f = parse_frequency(v)
-        try:
-            label = band(v).letter
-        except ValueError:
-            label = f"{f / 1e9:g}GHz"
-        out.append((label, f))
-    return out
+    return [parse_radar(v, label=lambda f: f"{f / 1e9:g}GHz") for v in values]
 
 
 def slick_table(film, radars, incidences, winds, water, *, azimuth=0.0, friction_ratio=1.0,
@@ -254,7 +227,6 @@ def _plot(film, radars, incidence, water, path):
 
 def run(args):
     from .. import slick as S
-    from ..water import Water
 
     if args.list_films:
         cols = presets_table()
@@ -274,7 +246,7 @@ def run(args):
     radars = _radars(args.radar)
     with warnings.catch_warnings(record=True) as caught:
         warnings.simplefilter("always")
-        water = Water(args.temperature, args.salinity)
+        water = water_from_args(args)
         table = slick_table(film, radars, args.incidence, args.wind, water,
                             azimuth=args.azimuth, friction_ratio=args.friction_ratio,
                             exponent=args.exponent, two_scale=args.two_scale,
@@ -282,12 +254,7 @@ def run(args):
         if any(not (20.0 <= th <= 60.0) for th in args.incidence):
             warnings.warn("incidence outside 20-60 degree: Bragg-scale contrast not valid "
                           "(specular return dominates nearer nadir)")
-    seen = set()
-    for w in caught:
-        msg = str(w.message)
-        if msg not in seen:
-            seen.add(msg)
-            print(f"shortwave {NAME}: warning: {msg}", file=sys.stderr)
+    report_warnings(NAME, caught, unique=True)
 
     units = {k: v for k, v in UNITS.items() if k in table}
     header = [f"Slick contrast, {describe(film)}",
@@ -295,17 +262,10 @@ def run(args):
               f"{args.azimuth:g} deg; balance model: u* ratio {args.friction_ratio:g}, "
               f"n = {args.exponent:g}",
               f"CAUTION: {S.CAUTION}", ""]
-    if args.format == "json":
-        doc = json.loads(format_table(table, fmt="json", units=units))
-        doc = {"caution": S.CAUTION, "film": describe(film), **doc}
-        print(json.dumps(doc, indent=1))
-    elif args.format == "csv":
-        print(f"shortwave {NAME}: CAUTION: {S.CAUTION}", file=sys.stderr)
-        print(format_table(table, fmt="csv", units=units))
-    else:
-        print(format_table(table, fmt="text", units=units, digits=4,
-                           title="\n".join(header)))
+    print_table(table, args.format, units=units, digits=4, title="\n".join(header),
+                head={"caution": S.CAUTION, "film": describe(film)},
+                note=f"shortwave {NAME}: CAUTION: {S.CAUTION}")
     if args.plot:
         path = _plot(film, radars, args.incidence[0], water, args.plot)
-        print(f"wrote {path}", file=sys.stderr if args.format != "text" else sys.stdout)
+        report_written(path, args.format)
     return 0

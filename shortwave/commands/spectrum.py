@@ -8,15 +8,14 @@ about 5000 rad/m, with the Bragg wavenumbers of radar bands marked on request.
 """
 from __future__ import annotations
 
-import argparse
-import json
-import math
 import sys
 import warnings
+from functools import partial
 
 import numpy as np
 
-from ..tables import FORMATS, format_table
+from ._common import (add_format_arguments, add_water_arguments, number, print_table,
+                      report_warnings, report_written, water_from_args)
 
 NAME = "spectrum"
 HELP = "full-range wind-wave spectrum for a wind: moments, NetCDF and a curvature plot"
@@ -41,19 +40,8 @@ PLOT_K_MAX = 5000.0
 """Upper end of the curvature plot [rad m-1]."""
 
 
-def _number(kind, *, positive=True, allow_inf=False):
-    def convert(text):
-        try:
-            v = float(text)
-        except ValueError:
-            raise argparse.ArgumentTypeError(f"not a number: {text!r}") from None
-        if math.isnan(v) or (math.isinf(v) and not (allow_inf and v > 0)):
-            raise argparse.ArgumentTypeError(f"{kind} must be finite, got {text!r}")
-        if positive and v <= 0:
-            raise argparse.ArgumentTypeError(f"{kind} must be > 0, got {text!r}")
-        return v
-    convert.__name__ = kind
-    return convert
+_number = partial(number, positive=True)
+"""argparse type: a finite, positive (unless ``positive=False``) float."""
 
 
 def add_arguments(parser):
@@ -77,14 +65,11 @@ def add_arguments(parser):
                         metavar="RAD/M", help="upper limit of the slope integrals [rad/m]")
     parser.add_argument("--points", type=int, default=DEFAULT_POINTS, metavar="N",
                         help="log-uniform wavenumbers of the integrals and the file")
-    parser.add_argument("--temperature", "-t", type=_number("temperature", positive=False),
-                        default=None, metavar="DEGC",
-                        help="water temperature [degC]; sets surface tension (and viscosity "
-                        "for yurovskaya2013).  Default: the model's own constants "
-                        "(elfouhaily1997: k_m = 370 rad/m; yurovskaya2013: 15 degC)")
-    parser.add_argument("--salinity", "-s", type=_number("salinity", positive=False),
-                        default=35.0, metavar="G/KG",
-                        help="absolute salinity [g/kg], used with --temperature")
+    add_water_arguments(parser, temperature_default=None,
+                        temperature_help="water temperature [degC]; sets surface tension "
+                        "(and viscosity for yurovskaya2013).  Default: the model's own "
+                        "constants (elfouhaily1997: k_m = 370 rad/m; yurovskaya2013: 15 degC)",
+                        salinity_help="absolute salinity [g/kg], used with --temperature")
     parser.add_argument("--directions", type=int, default=72, metavar="N",
                         help="number of directions of F(k, phi) in the NetCDF file")
     parser.add_argument("--output", "-o", metavar="FILE.nc", default=None,
@@ -98,22 +83,20 @@ def add_arguments(parser):
                         "or frequencies (5.4GHz)")
     parser.add_argument("--incidence", type=_number("incidence"), nargs="+", default=[40.0],
                         metavar="DEG", help="incidence angles [degree] of the Bragg marks")
-    parser.add_argument("--format", choices=FORMATS, default="text",
-                        help="aligned text for people, csv or json for programs")
+    add_format_arguments(parser)
 
 
 def compute(args):
     """Compute the spectra and moments for the parsed arguments (dict of arrays)."""
     from .. import spectrum as sp
     from ..spectrum import moments
-    from ..water import Water
 
     if args.points < 11:
         raise ValueError(f"--points: at least 11 are needed, got {args.points}")
     if args.directions < 4 or args.directions % 2:
         raise ValueError(f"--directions: an even number >= 4 is needed, got {args.directions}")
     U = np.asarray(args.wind_speed, dtype=float)
-    water = None if args.temperature is None else Water(args.temperature, args.salinity)
+    water = None if args.temperature is None else water_from_args(args)
     if args.fetch is not None:
         om = np.atleast_1d(sp.inverse_wave_age_from_fetch(args.fetch * 1e3, U))
     else:
@@ -226,31 +209,23 @@ def run(args):
         res = compute(args)
         ds = _dataset(args, res) if args.output else None
         marks = _marks(args) if args.plot else []
-    for msg in dict.fromkeys(str(w.message) for w in caught):
-        print(f"shortwave {NAME}: warning: {msg}", file=sys.stderr)
+    report_warnings(NAME, caught, unique=True)
     if args.bands and not args.plot:
         print(f"shortwave {NAME}: warning: --bands only marks the --plot figure",
               file=sys.stderr)
     table = res["table"]
-    if args.format == "json":
-        doc = json.loads(format_table(table, fmt="json", units=UNITS))
-        doc = {"model": args.model, "ustar_law": args.ustar_law, **doc}
-        print(json.dumps(doc, indent=1))
-    elif args.format == "csv":
-        print(format_table(table, fmt="csv", units=UNITS))
-    else:
-        sea = (f"fetch {args.fetch:g} km" if args.fetch is not None
-               else f"inverse wave age {args.inverse_wave_age:g}")
-        title = (f"Wind-wave spectrum, model {args.model}, {sea}, u* law {args.ustar_law}\n"
-                 "Hs = 4 sqrt(variance); slopes integrated from k_min to k_max; "
-                 "upwind/crosswind = along/across the wind axis\n")
-        print(format_table(table, fmt="text", units=UNITS, title=title))
-    info = sys.stderr if args.format != "text" else sys.stdout
+    sea = (f"fetch {args.fetch:g} km" if args.fetch is not None
+           else f"inverse wave age {args.inverse_wave_age:g}")
+    title = (f"Wind-wave spectrum, model {args.model}, {sea}, u* law {args.ustar_law}\n"
+             "Hs = 4 sqrt(variance); slopes integrated from k_min to k_max; "
+             "upwind/crosswind = along/across the wind axis\n")
+    print_table(table, args.format, units=UNITS, title=title,
+                head={"model": args.model, "ustar_law": args.ustar_law})
     if args.output:
         from ..ncio import write_netcdf
         path = write_netcdf(ds, args.output, overwrite=args.overwrite,
                             encoding={c: {"_FillValue": None} for c in ds.coords})
-        print(f"wrote {path}", file=info)
+        report_written(path, args.format)
     if args.plot:
         from ..plots.spectrum import curvature_figure
         k = res["k"]
@@ -259,5 +234,5 @@ def run(args):
                   for u, o, s in zip(table["wind_speed"], table["inverse_wave_age"], res["S"])]
         path = curvature_figure(k, curves, args.plot, marks=marks, k_range=(lo, PLOT_K_MAX),
                                 title=f"Curvature spectrum, {args.model}")
-        print(f"wrote {path}", file=info)
+        report_written(path, args.format)
     return 0

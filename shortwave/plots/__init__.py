@@ -37,3 +37,60 @@ def save_figure(fig, path, dpi=120):
         if os.path.exists(tmp):
             os.remove(tmp)
     return path
+
+
+def minor_label(value, _pos):
+    """Label the 2 and 5 minor ticks of a logarithmic axis, leave the others blank.
+
+    Examples
+    --------
+    >>> minor_label(0.02, None), minor_label(300.0, None), minor_label(0.0, None)
+    ('0.02', '', '')
+    """
+    import numpy as np
+    if value <= 0:
+        return ""
+    mantissa = value / 10.0 ** np.floor(np.log10(value))
+    return f"{value:g}" if round(mantissa) in (2, 5) else ""
+
+
+def plain_log_labels(axis, *, minor=True):
+    """Plain numbers (``0.01``, not ``10^-2``) on a logarithmic ``ax.xaxis``/``ax.yaxis``;
+    with ``minor`` the 2 and 5 minor ticks are labelled too (:func:`minor_label`).
+
+    Examples
+    --------
+    >>> fig, ax = new_figure()
+    >>> ax.set_yscale("log")
+    >>> plain_log_labels(ax.yaxis)
+    >>> ax.yaxis.get_major_formatter()(0.01, 0)
+    '0.01'
+    >>> import matplotlib.pyplot as plt; plt.close(fig)
+    """
+    from matplotlib.ticker import FuncFormatter
+    axis.set_major_formatter(FuncFormatter(lambda v, _pos: f"{v:g}"))
+    if minor:
+        axis.set_minor_formatter(FuncFormatter(minor_label))
+
+
+def wavelength_axis(ax, *, label="wavelength [m]", factor=1.0, floor=1e-30):
+    """Add a top axis giving the wavelength ``factor * 2 pi / k`` of a wavenumber x axis.
+
+    ``factor`` converts metres to the unit of ``label`` (100 for cm); wavenumbers below
+    ``floor`` [rad m-1] are clipped to it.  Returns the secondary axis.
+
+    Examples
+    --------
+    >>> fig, ax = new_figure()
+    >>> top = wavelength_axis(ax, label="wavelength [cm]", factor=100)
+    >>> top.get_xlabel()
+    'wavelength [cm]'
+    >>> import matplotlib.pyplot as plt; plt.close(fig)
+    """
+    import numpy as np
+
+    def convert(x):        # k [rad/m] -> wavelength, and back (the same map)
+        return 2 * np.pi / np.maximum(x, floor) * factor
+    top = ax.secondary_xaxis("top", functions=(convert, convert))
+    top.set_xlabel(label)
+    return top

@@ -3,17 +3,9 @@ from __future__ import annotations
 
 import numpy as np
 
-from . import new_figure, save_figure
+from . import new_figure, plain_log_labels, save_figure
 
 __all__ = ["speed_curves"]
-
-
-def _minor_label(value, _pos):
-    """Label the 2 and 5 minor ticks of a logarithmic axis, leave the others blank."""
-    if value <= 0:
-        return ""
-    mantissa = value / 10.0 ** np.floor(np.log10(value))
-    return f"{value:g}" if round(mantissa) in (2, 5) else ""
 
 
 def speed_curves(water, path, *, depth=np.inf, wavelength_range=(1e-3, 10.0), marks=None,
@@ -83,11 +75,8 @@ def speed_curves(water, path, *, depth=np.inf, wavelength_range=(1e-3, 10.0), ma
                     label="table rows")
     ax.set_xscale("log")
     ax.set_yscale("log")
-    from matplotlib.ticker import FuncFormatter
-    plain = FuncFormatter(lambda v, _pos: f"{v:g}")
-    ax.xaxis.set_major_formatter(plain)
-    ax.yaxis.set_major_formatter(plain)
-    ax.yaxis.set_minor_formatter(FuncFormatter(_minor_label))
+    plain_log_labels(ax.xaxis, minor=False)
+    plain_log_labels(ax.yaxis)
     ax.set_xlabel("wavelength [m]")
     ax.set_ylabel("speed [m/s]")
     if title is None:

@@ -3,7 +3,7 @@ from __future__ import annotations
 
 import numpy as np
 
-from . import new_figure, save_figure
+from . import new_figure, save_figure, wavelength_axis
 
 __all__ = ["damping_ratio_figure"]
 
@@ -67,9 +67,7 @@ def damping_ratio_figure(k, ratio, path, *, bragg_marks=None, highlight=None, ti
     ax.set_ylim(0.0, ymax * 1.45)
     ax.grid(True, which="both", alpha=0.25)
     ax.legend(loc="center left", fontsize=8)
-    secx = ax.secondary_xaxis("top", functions=(lambda kk: 2 * np.pi / np.maximum(kk, 1e-9) * 100,
-                                                 lambda lam: 2 * np.pi / np.maximum(lam, 1e-9) * 100))
-    secx.set_xlabel("wavelength [cm]")
+    wavelength_axis(ax, label="wavelength [cm]", factor=100, floor=1e-9)
     if title:
         ax.set_title(title, fontsize=9, pad=28)
     return save_figure(fig, path)

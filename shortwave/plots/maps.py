@@ -40,7 +40,9 @@ def units_label(units):
     return "dB" if u.replace(" ", "") in ("0.1lg(re1)", "lg(re1)/10") else u
 
 
-def _draw(ax, da, *, cmap="viridis", vmin=None, vmax=None, title=None, land=None):
+def _draw(ax, da, *, cmap="viridis", vmin=None, vmax=None, title=None, land=None,
+          arrows=None):
+    """Draw one map panel on ``ax``: field, land, labels, colour bar and ``arrows``."""
     x, y, xl, yl = _coords(da)
     vals = np.ma.masked_invalid(np.asarray(da.values, dtype=float))
     mesh = ax.pcolormesh(x, y, vals, cmap=cmap, vmin=vmin, vmax=vmax, shading="auto")
@@ -55,6 +57,8 @@ def _draw(ax, da, *, cmap="viridis", vmin=None, vmax=None, title=None, land=None
     ax.set_title(name if len(name) < 60 else name[:57] + "...", fontsize=9)
     cb = ax.figure.colorbar(mesh, ax=ax, shrink=0.85)
     cb.set_label(f"[{units}]" if units else "")
+    if arrows is not None:
+        _quiver(ax, da, *arrows)
     return mesh
 
 
@@ -94,9 +98,7 @@ def field_map(da, path, *, cmap="viridis", vmin=None, vmax=None, title=None, lan
     if da.ndim != 2:
         raise ValueError(f"field_map: {da.name} has {da.ndim} dimensions, need 2")
     fig, ax = new_figure(figsize=(6.4, 5.0))
-    _draw(ax, da, cmap=cmap, vmin=vmin, vmax=vmax, title=title, land=land)
-    if arrows is not None:
-        _quiver(ax, da, *arrows)
+    _draw(ax, da, cmap=cmap, vmin=vmin, vmax=vmax, title=title, land=land, arrows=arrows)
     return save_figure(fig, path)
 
 
@@ -144,11 +146,7 @@ def scene_panels(fields, path, *, land=None, suptitle=None, ncols=2):
     nrows = int(np.ceil(n / ncols))
     fig, axes = new_figure(nrows, ncols, figsize=(5.6 * ncols, 4.6 * nrows), squeeze=False)
     for ax, (da, opts) in zip(axes.ravel(), fields):
-        opts = dict(opts)
-        arrows = opts.pop("arrows", None)
         _draw(ax, da, land=land, **opts)
-        if arrows is not None:
-            _quiver(ax, da, *arrows)
     for ax in axes.ravel()[n:]:
         ax.set_visible(False)
     if suptitle:

@@ -3,7 +3,7 @@ from __future__ import annotations
 
 import numpy as np
 
-from . import new_figure, save_figure
+from . import new_figure, plain_log_labels, save_figure
 
 __all__ = ["bragg_scales_plot", "backscatter_plot"]
 
@@ -43,7 +43,6 @@ def bragg_scales_plot(radars, path, *, water=None, depth=np.inf, marks=None, tit
             ax1.plot([marks["incidence"][i] for i in sel],
                      [marks["bragg_wavelength"][i] for i in sel], "o",
                      color=line.get_color(), ms=4)
-    from matplotlib.ticker import FuncFormatter
     ax1.set_xlabel("incidence angle [deg]")
     ax1.set_ylabel("Bragg wavelength [m]")
     ax2.set_xlabel("incidence angle [deg]")
@@ -51,21 +50,12 @@ def bragg_scales_plot(radars, path, *, water=None, depth=np.inf, marks=None, tit
     for ax in (ax1, ax2):
         ax.grid(True, which="both", alpha=0.3)
         ax.set_xlim(0, 90)
-        ax.yaxis.set_major_formatter(FuncFormatter(lambda v, _p: f"{v:g}"))
-        ax.yaxis.set_minor_formatter(FuncFormatter(_minor_label))
+        plain_log_labels(ax.yaxis)
     ax1.legend(fontsize=8)
     fig.tight_layout(rect=(0, 0, 1, 0.94))
     fig.suptitle(title or "Bragg-resonant ocean waves: wavelength lambda/(2 sin theta) and "
                  "frequency (capillary-gravity dispersion)", fontsize=10)
     return save_figure(fig, path)
-
-
-def _minor_label(value, _pos):
-    """Label the 2 and 5 minor ticks of a logarithmic axis, leave the others blank."""
-    if value <= 0:
-        return ""
-    mantissa = value / 10.0 ** np.floor(np.log10(value))
-    return f"{value:g}" if round(mantissa) in (2, 5) else ""
 
 
 def _flabel(f):

@@ -3,7 +3,7 @@ from __future__ import annotations
 
 import numpy as np
 
-from . import new_figure, save_figure
+from . import new_figure, save_figure, wavelength_axis
 
 __all__ = ["curvature_figure"]
 
@@ -52,9 +52,7 @@ def curvature_figure(k, curves, path, *, marks=(), title=None, k_range=None):
     ax.set_xlabel("wavenumber k [rad/m]")
     ax.set_ylabel("curvature spectrum B(k) = k³ S(k)")
     ax.grid(True, which="major", alpha=0.3)
-    top = ax.secondary_xaxis("top", functions=(lambda x: 2 * np.pi / np.maximum(x, 1e-30),
-                                               lambda x: 2 * np.pi / np.maximum(x, 1e-30)))
-    top.set_xlabel("wavelength [m]")
+    wavelength_axis(ax)
     if len(curves) > 1 or curves and curves[0][0]:
         ax.legend(fontsize=8, loc="upper left")
     if title:

@@ -3,7 +3,7 @@ from __future__ import annotations
 
 import numpy as np
 
-from . import new_figure, save_figure
+from . import new_figure, save_figure, wavelength_axis
 
 __all__ = ["tail_figure"]
 
@@ -81,9 +81,7 @@ def tail_figure(parts, path, *, title=None):
     ax.set_xlim(k[0], k[-1])
     ax.set_xlabel("wavenumber k [rad/m]")
     ax.set_ylabel("curvature spectrum B(k) = k³ S(k)")
-    top = ax.secondary_xaxis("top", functions=(lambda x: 2 * np.pi / np.maximum(x, 1e-30),
-                                               lambda x: 2 * np.pi / np.maximum(x, 1e-30)))
-    top.set_xlabel("wavelength [m]")
+    wavelength_axis(ax)
     text = (f"U10 = {parts['wind_speed']:.1f} m/s\n"
             f"Hs = {parts['hs']:.2f} m (wave model {parts['hs_resolved']:.2f} m)\n"
             f"mss: wave model {parts['mss_resolved']:.4f} + tail {parts['mss_tail']:.4f}"
