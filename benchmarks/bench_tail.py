@@ -138,7 +138,7 @@ def main(argv=None):
         big = os.path.join(folder, "spectra_x4.nc")
         n4 = make_file(big, 4 * a.spectra)
         mb4 = os.path.getsize(big) / 2**20
-        print(f"\npeak resident memory of a fresh process (MiB; baseline = after imports):")
+        print("\npeak resident memory of a fresh process (MiB; baseline = after imports):")
         print(f"{'input':34s} {'file MiB':>9s} {'baseline':>9s} {'peak':>8s} {'peak-base':>10s}")
         small = ["--chunk-spectra", str(max(a.chunk_spectra // 4, 1))]
         for label, path, size, extra in (

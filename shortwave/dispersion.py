@@ -21,7 +21,7 @@ from __future__ import annotations
 
 import numpy as np
 
-from ._checks import ShortwaveInputError, as_float_array, check_positive, scalar_or_array
+from ._checks import as_float_array, check_positive, scalar_or_array
 from .water import as_liquid
 
 __all__ = ["GRAVITY", "angular_frequency", "phase_speed", "group_speed", "wavenumber",

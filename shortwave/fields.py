@@ -1281,23 +1281,5 @@ def start_local_cluster(n_workers, threads_per_worker=1):
 
 
 def _check_output(output, inputs, overwrite):
-    """Refuse a bad output early, before any computation."""
-    path = os.fspath(output)
-    for src in inputs:
-        if ncio.same_file(path, src):
-            raise ValueError(f"output {path} is the input file; choose another output path")
-    if os.path.isdir(path):
-        raise OSError(f"output {path} is a folder; give a file name")
-    if os.path.exists(path) and not overwrite:
-        raise ValueError(f"output {path} exists; pass --overwrite to replace it")
-    folder = os.path.dirname(os.path.abspath(path))
-    if not os.path.isdir(folder):
-        raise OSError(f"output folder {folder} does not exist")
-    if not os.access(folder, os.W_OK):
-        raise OSError(f"output folder {folder} is not writable")
-    import tempfile
-    try:                                   # a real probe: permissions, read-only mounts
-        with tempfile.TemporaryFile(dir=folder):
-            pass
-    except OSError as exc:
-        raise OSError(f"output folder {folder} is not writable ({exc.strerror})") from None
+    """Refuse a bad output early, before any computation (:func:`shortwave.ncio.check_output`)."""
+    ncio.check_output(output, inputs, overwrite)

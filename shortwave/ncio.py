@@ -41,7 +41,7 @@ from typing import NamedTuple
 
 from .metadata import CONVENTIONS
 
-__all__ = ["write_netcdf", "same_file", "history_line", "open_input", "Role", "ROLES",
+__all__ = ["write_netcdf", "check_output", "same_file", "history_line", "open_input", "Role", "ROLES",
            "register_role", "find_variable", "convert_units", "read_role",
            "parse_overrides", "parse_chunks", "UNITS", "parse_units", "units_equivalent"]
 
@@ -72,6 +72,49 @@ def _umask():
     mask = os.umask(0o022)
     os.umask(mask)
     return mask
+
+
+def check_output(path, inputs=(), overwrite=False):
+    """Refuse a bad output path, before any work is done; return its folder.
+
+    Parameters
+    ----------
+    path : str or os.PathLike
+        The output file.
+    inputs : sequence of path
+        Files the data come from: the output may not be any of them.
+    overwrite : bool
+        Whether an existing output may be replaced.
+
+    Raises
+    ------
+    ValueError
+        Output equal to an input, or existing output without ``overwrite``.
+    OSError
+        Output is a folder; its folder is missing or not writable (a real probe, so
+        read-only mounts are caught too).
+    """
+    import tempfile as _tempfile
+    path = os.fspath(path)
+    for src in inputs:
+        if src is not None and same_file(path, os.fspath(src)):
+            raise ValueError(f"output {path} is the input file {os.fspath(src)}; choose "
+                             "another output path")
+    if os.path.isdir(path):
+        raise OSError(f"output {path} is a folder; give a file name")
+    if os.path.exists(path) and not overwrite:
+        raise ValueError(f"output {path} exists; pass --overwrite to replace it")
+    folder = os.path.dirname(os.path.abspath(path))
+    if not os.path.isdir(folder):
+        raise OSError(f"output folder {folder} does not exist")
+    if not os.access(folder, os.W_OK):
+        raise OSError(f"output folder {folder} is not writable")
+    try:
+        with _tempfile.TemporaryFile(dir=folder):
+            pass
+    except OSError as exc:
+        raise OSError(f"output folder {folder} is not writable ({exc.strerror})") from None
+    return folder
 
 
 def write_netcdf(ds, path, *, inputs=(), overwrite=False, command=None, encoding=None,
@@ -112,16 +155,7 @@ def write_netcdf(ds, path, *, inputs=(), overwrite=False, command=None, encoding
         Folder missing or not writable.
     """
     path = os.fspath(path)
-    for src in inputs:
-        if src is not None and same_file(path, os.fspath(src)):
-            raise ValueError(f"output {path} is the input file; choose another output path")
-    if os.path.exists(path) and not overwrite:
-        raise ValueError(f"output {path} exists; pass overwrite (--overwrite) to replace it")
-    folder = os.path.dirname(os.path.abspath(path))
-    if not os.path.isdir(folder):
-        raise OSError(f"output folder {folder} does not exist")
-    if not os.access(folder, os.W_OK):
-        raise OSError(f"output folder {folder} is not writable")
+    folder = check_output(path, inputs, overwrite)
     out = ds.copy(deep=False)
     out.attrs = dict(ds.attrs)
     out.attrs["Conventions"] = CONVENTIONS

@@ -189,12 +189,7 @@ def run(args):
                         prepare_inputs, spectrum_parts, splits_stored_chunks)
 
     inputs = [args.input] + ([args.wind_file] if args.wind_file else [])
-    for src in inputs:       # refuse before any work
-        if ncio.same_file(args.output, src):
-            raise ValueError(f"output {args.output} is the input file {src}; choose another "
-                             "output path")
-    if os.path.exists(args.output) and not args.overwrite:
-        raise ValueError(f"output {args.output} exists; pass --overwrite to replace it")
+    ncio.check_output(args.output, inputs, args.overwrite)   # refuse before any work
     overrides = ncio.parse_overrides(args.var)
     units = _units_map(args.units)
     if args.points_per_decade < 4:
