@@ -375,8 +375,10 @@ def open_scene(source, *, overrides=None, chunks=None, swath=None, across_dim=No
                              "northward components); name it with --var wind_direction=NAME")
         wind = _convert(speed, "wind_speed", "m s-1")
         wd = _convert(wdir, "wind_direction", "degree")
-        if wdir.attrs.get("standard_name") == "wind_to_direction" or \
-                "to_direction" in str(wdir.name):
+        # the CF standard name decides "from" or "to"; the variable name only when the
+        # variable has no standard name (same rule as tail.wind_inputs)
+        sn = wdir.attrs.get("standard_name")
+        if sn == "wind_to_direction" or (not sn and "to_direction" in str(wdir.name)):
             wd = wd + 180.0
         wind_from = wd % 360.0
         names["wind"] = f"{speed.name} + {wdir.name}"

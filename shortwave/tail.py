@@ -836,7 +836,8 @@ def wind_inputs(ds, spec, *, wind=None, wind_speed=None, wind_direction=None,
         direction = role("wind_direction")
         if direction is not None:
             prov.append(f"wind direction from variable {direction.name!r} of the {source}")
-            if direction.attrs.get("standard_name") == "wind_to_direction":
+            sn = direction.attrs.get("standard_name")   # same rule as fields.read_scene
+            if sn == "wind_to_direction" or (not sn and "to_direction" in str(direction.name)):
                 direction = (direction + 180.0) % 360.0
     if speed is None or direction is None:
         u, v = role("eastward_wind"), role("northward_wind")
