@@ -645,6 +645,11 @@ def _direction_convention(dvar, given):
         conv = None
     if given is not None:
         given = check_choice("direction_convention", given, ("from", "to"))
+        if conv is not None and conv != given:
+            raise ValueError(
+                f"direction axis {dvar.name!r} is labelled {sn!r} but the direction "
+                f"convention given is {given!r}; fix the file's standard_name or drop "
+                "--direction-convention")
         return given
     if conv is None:
         raise ValueError(

@@ -268,3 +268,21 @@ def test_wind_to_direction_decided_by_standard_name_then_name():
     ds["wind_to_direction"].attrs["standard_name"] = "wind_from_direction"
     _, direction, _ = wind_inputs(ds, spec, overrides={"wind_direction": "wind_to_direction"})
     assert float(direction) == 90.0
+
+
+def test_direction_convention_that_contradicts_the_file_is_refused():
+    # CF standard-name table v83: sea_surface_wave_from_direction vs _to_direction.
+    # A --direction-convention that contradicts the file's own label is an error, not a
+    # silent override (it would rotate every spectrum by 180 degrees).
+    import pytest
+    from shortwave.synthetic import greyhaven_spectra
+    from shortwave.tail import prepare_inputs
+    ds = greyhaven_spectra(2)
+    dname = [v for v in ds.variables
+             if ds[v].attrs.get("standard_name", "").startswith("sea_surface_wave_")
+             and ds[v].attrs["standard_name"].endswith("_direction")][0]
+    label = ds[dname].attrs["standard_name"].split("_")[-2]        # "from" or "to"
+    other = "to" if label == "from" else "from"
+    prepare_inputs(ds, direction_convention=label)                  # agreeing: accepted
+    with pytest.raises(ValueError, match="direction convention given"):
+        prepare_inputs(ds, direction_convention=other)
