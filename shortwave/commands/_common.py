@@ -75,6 +75,43 @@ def add_format_arguments(parser, *, shortcuts=False, help=FORMAT_HELP):
                             help="same as --format json")
 
 
+def add_film_arguments(group, *, oil_thickness_help="oil layer thickness [m] (with an oil "
+                       "preset: overrides its thickness)"):
+    """Add the film-parameter options (monolayer and oil layer) to an argparse group.
+
+    The film itself is built from them by :func:`shortwave.commands.slick.build_film`;
+    ``--film`` (the preset name) is added by each command with its own help.
+    """
+    def num(kind, **kw):
+        return number(kind, positive=not kw.get("nonnegative"), **kw)
+    group.add_argument("--elasticity", type=num("elasticity", nonnegative=True),
+                       metavar="N/M", default=None,
+                       help="monolayer dilational elasticity E0 [N/m], e.g. 0.025")
+    group.add_argument("--relaxation-frequency", type=num("relaxation frequency",
+                                                          nonnegative=True),
+                       metavar="RAD/S", default=None,
+                       help="diffusional relaxation frequency omega_D [rad/s] (0: insoluble)")
+    group.add_argument("--dilational-viscosity", type=num("dilational viscosity",
+                                                          nonnegative=True),
+                       metavar="N.S/M", default=None,
+                       help="surface dilational viscosity [N s/m]")
+    group.add_argument("--film-pressure", type=number("film pressure"),
+                       metavar="N/M", default=None,
+                       help="lowering of the surface tension by the film [N/m]")
+    group.add_argument("--oil-thickness", type=num("oil thickness", nonnegative=True),
+                       metavar="M", default=None, help=oil_thickness_help)
+    group.add_argument("--oil-viscosity", type=num("oil viscosity"),
+                       metavar="PA.S", default=None, help="oil dynamic viscosity [Pa s]")
+    group.add_argument("--oil-density", type=num("oil density"), metavar="KG/M3",
+                       default=None, help="oil density [kg/m3] (default 850)")
+    group.add_argument("--oil-surface-tension", type=num("oil surface tension"),
+                       metavar="N/M", default=None,
+                       help="oil-air surface tension [N/m] (default 0.027)")
+    group.add_argument("--oil-interfacial-tension", type=num("oil interfacial tension"),
+                       metavar="N/M", default=None,
+                       help="oil-water interfacial tension [N/m] (default 0.020)")
+
+
 def water_from_args(args, **overrides):
     """The :class:`shortwave.water.Water` of ``--temperature`` and ``--salinity``."""
     from ..water import Water

@@ -8,7 +8,7 @@ import sys
 import time
 from functools import partial
 
-from ._common import number
+from ._common import add_film_arguments, number
 
 NAME = "scene"
 HELP = "radar products for every cell of a gridded scene (NetCDF in, NetCDF out)"
@@ -88,29 +88,8 @@ def add_arguments(parser):
     film.add_argument("--cover", default="auto", choices=("auto", "mask", "everywhere"),
                       help="where the film is: the file's mask, or every sea cell (a "
                       "what-if map); auto = the mask when there is one")
-    film.add_argument("--elasticity", type=_number("elasticity", nonnegative=True),
-                      default=None, metavar="N/M", help="monolayer elasticity E0 [N/m]")
-    film.add_argument("--relaxation-frequency", type=_number("relaxation frequency",
-                                                              nonnegative=True),
-                      default=None, metavar="RAD/S", help="monolayer omega_D [rad/s]")
-    film.add_argument("--dilational-viscosity", type=_number("dilational viscosity",
-                                                              nonnegative=True),
-                      default=None, metavar="N.S/M", help="surface dilational viscosity")
-    film.add_argument("--film-pressure", type=_number("film pressure"), default=None,
-                      metavar="N/M", help="film pressure [N/m]")
-    film.add_argument("--oil-thickness", type=_number("oil thickness", nonnegative=True),
-                      default=None, metavar="M", help="oil layer thickness [m] (a "
-                      "film_thickness variable in the file takes precedence)")
-    film.add_argument("--oil-viscosity", type=_number("oil viscosity", positive=True),
-                      default=None, metavar="PA.S", help="oil dynamic viscosity [Pa s]")
-    film.add_argument("--oil-density", type=_number("oil density", positive=True),
-                      default=None, metavar="KG/M3", help="oil density [kg/m3]")
-    film.add_argument("--oil-surface-tension", type=_number("oil surface tension",
-                                                             positive=True),
-                      default=None, metavar="N/M", help="oil-air surface tension [N/m]")
-    film.add_argument("--oil-interfacial-tension", type=_number("oil interfacial tension",
-                                                                 positive=True),
-                      default=None, metavar="N/M", help="oil-water interfacial tension [N/m]")
+    add_film_arguments(film, oil_thickness_help="oil layer thickness [m] (a "
+                       "film_thickness variable in the file takes precedence)")
     run_ = parser.add_argument_group("running")
     run_.add_argument("--chunks", default=None, metavar="DIM:N,...|auto",
                       help="read in dask chunks and compute lazily (default: auto for "

@@ -15,8 +15,9 @@ from functools import partial
 import numpy as np
 
 from ..tables import format_table
-from ._common import (add_format_arguments, add_water_arguments, number, parse_radar,
-                      print_table, report_warnings, report_written, water_from_args)
+from ._common import (add_film_arguments, add_format_arguments, add_water_arguments, number,
+                      parse_radar, print_table, report_warnings, report_written,
+                      water_from_args)
 
 NAME = "slick"
 HELP = "film damping ratio and radar slick contrast against wind (screening estimate)"
@@ -51,34 +52,7 @@ def add_arguments(parser):
                       "shows them")
     film.add_argument("--list-films", action="store_true",
                       help="list the film presets with their values, ranges and sources")
-    film.add_argument("--elasticity", type=_number("elasticity", nonnegative=True),
-                      metavar="N/M", help="monolayer dilational elasticity E0 [N/m], "
-                      "e.g. 0.025")
-    film.add_argument("--relaxation-frequency", type=_number("relaxation frequency",
-                                                              nonnegative=True),
-                      metavar="RAD/S", default=None,
-                      help="diffusional relaxation frequency omega_D [rad/s] (0: insoluble)")
-    film.add_argument("--dilational-viscosity", type=_number("dilational viscosity",
-                                                              nonnegative=True),
-                      metavar="N.S/M", default=None,
-                      help="surface dilational viscosity [N s/m]")
-    film.add_argument("--film-pressure", type=_number("film pressure", positive=False),
-                      metavar="N/M", default=None,
-                      help="lowering of the surface tension by the film [N/m]")
-    film.add_argument("--oil-thickness", type=_number("oil thickness", nonnegative=True),
-                      metavar="M", default=None,
-                      help="oil layer thickness [m] (with an oil preset: overrides its "
-                      "thickness)")
-    film.add_argument("--oil-viscosity", type=_number("oil viscosity", nonnegative=True),
-                      metavar="PA.S", default=None, help="oil dynamic viscosity [Pa s]")
-    film.add_argument("--oil-density", type=_number("oil density"), metavar="KG/M3",
-                      default=None, help="oil density [kg/m3] (default 850)")
-    film.add_argument("--oil-surface-tension", type=_number("oil surface tension"),
-                      metavar="N/M", default=None,
-                      help="oil-air surface tension [N/m] (default 0.027)")
-    film.add_argument("--oil-interfacial-tension", type=_number("oil interfacial tension"),
-                      metavar="N/M", default=None,
-                      help="oil-water interfacial tension [N/m] (default 0.020)")
+    add_film_arguments(film)
     parser.add_argument("--radar", nargs="+", default=["C"], metavar="BAND|FREQ",
                         help="radar band letters or frequencies (C, X, L, Ku, 5.4GHz, ...)")
     parser.add_argument("--incidence", nargs="+", type=_number("incidence"), default=[30.0],
